@@ -1,0 +1,31 @@
+//! The float functions core needs, in one place: the standard library's with the `std` feature,
+//! `libm`'s without it. Nothing else in core calls a float function directly.
+
+macro_rules! shim {
+    ($(#[$doc:meta] $name:ident($($arg:ident),+))+) => {$(
+        #[$doc]
+        #[inline]
+        #[must_use]
+        pub fn $name($($arg: f64),+) -> f64 {
+            #[cfg(feature = "std")]
+            { f64::$name($($arg),+) }
+            #[cfg(not(feature = "std"))]
+            { libm::$name($($arg),+) }
+        }
+    )+};
+}
+
+shim! {
+    /// Square root.
+    sqrt(x)
+    /// Sine of an angle in radians.
+    sin(x)
+    /// Cosine of an angle in radians.
+    cos(x)
+    /// Four-quadrant arctangent of y/x, in (−π, π].
+    atan2(y, x)
+    /// Arccosine, in [0, π].
+    acos(x)
+    /// √(x² + y²) without undue overflow or underflow.
+    hypot(x, y)
+}

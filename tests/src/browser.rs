@@ -1,0 +1,361 @@
+//! A small driver for Debian's headless Chromium over the DevTools protocol (a websocket). It
+//! launches a fresh browser with its own profile, opens one page, and offers what the page tests
+//! need: navigate, evaluate JavaScript, type like a user, click, read console errors and the
+//! request log, take screenshots. No browser is downloaded; `CHROMIUM` overrides the binary path.
+
+use serde_json::{json, Value};
+use std::collections::VecDeque;
+use std::io;
+use std::net::TcpStream;
+use std::path::{Path, PathBuf};
+use std::process::{Child, Command, Stdio};
+use std::time::{Duration, Instant};
+use tungstenite::stream::MaybeTlsStream;
+use tungstenite::{Message, WebSocket};
+
+/// Errors from the driver, as text (tests print them).
+pub type Result<T> = std::result::Result<T, String>;
+
+/// A running Chromium with one attached page.
+pub struct Chromium {
+    child: Child,
+    profile: PathBuf,
+    ws: WebSocket<MaybeTlsStream<TcpStream>>,
+    session: String,
+    next_id: u64,
+    events: VecDeque<Value>,
+    console_errors: Vec<String>,
+    requests: Vec<String>,
+}
+
+/// The Chromium binary: `$CHROMIUM`, else the Debian path.
+#[must_use]
+pub fn chromium_path() -> PathBuf {
+    std::env::var_os("CHROMIUM").map_or_else(|| PathBuf::from("/usr/bin/chromium"), PathBuf::from)
+}
+
+impl Chromium {
+    /// Starts a headless Chromium with a fresh profile under `target/` and attaches to a blank page.
+    ///
+    /// # Errors
+    /// When the browser is missing, does not start, or does not answer within 30 s.
+    pub fn launch() -> Result<Self> {
+        static COUNT: std::sync::atomic::AtomicUsize = std::sync::atomic::AtomicUsize::new(0);
+        let n = COUNT.fetch_add(1, std::sync::atomic::Ordering::SeqCst);
+        let profile = crate::check::target_dir()
+            .join(format!("browser-profiles/p{}-{n}", std::process::id()));
+        let _ = std::fs::remove_dir_all(&profile);
+        std::fs::create_dir_all(&profile).map_err(|e| format!("profile dir: {e}"))?;
+        let bin = chromium_path();
+        let child = Command::new(&bin)
+            .args([
+                "--headless",
+                "--no-sandbox",
+                "--disable-gpu",
+                "--disable-quic",
+                "--no-first-run",
+                "--disable-background-networking",
+                "--disable-component-update",
+                "--disable-sync",
+                "--disable-extensions",
+                "--disable-default-apps",
+                "--mute-audio",
+                "--hide-scrollbars",
+                "--window-size=1400,1600",
+                "--remote-debugging-port=0",
+                "--remote-allow-origins=*",
+            ])
+            .arg(format!("--user-data-dir={}", profile.display()))
+            .arg("about:blank")
+            .stdout(Stdio::null())
+            .stderr(Stdio::null())
+            .spawn()
+            .map_err(|e| {
+                format!(
+                    "cannot start {}: {e} (install Debian's chromium)",
+                    bin.display()
+                )
+            })?;
+        let port_file = profile.join("DevToolsActivePort");
+        let start = Instant::now();
+        let (port, path) = loop {
+            if let Ok(text) = std::fs::read_to_string(&port_file) {
+                let mut lines = text.lines();
+                if let (Some(p), Some(path)) = (lines.next(), lines.next()) {
+                    break (p.trim().to_string(), path.trim().to_string());
+                }
+            }
+            if start.elapsed() > Duration::from_secs(30) {
+                return Err("Chromium did not open its DevTools port within 30 s".into());
+            }
+            std::thread::sleep(Duration::from_millis(50));
+        };
+        let (ws, _) = tungstenite::connect(format!("ws://127.0.0.1:{port}{path}"))
+            .map_err(|e| format!("devtools connect: {e}"))?;
+        if let MaybeTlsStream::Plain(s) = ws.get_ref() {
+            s.set_read_timeout(Some(Duration::from_secs(60)))
+                .map_err(|e| e.to_string())?;
+        }
+        let mut me = Self {
+            child,
+            profile,
+            ws,
+            session: String::new(),
+            next_id: 1,
+            events: VecDeque::new(),
+            console_errors: Vec::new(),
+            requests: Vec::new(),
+        };
+        let target = me.browser_call("Target.createTarget", json!({ "url": "about:blank" }))?;
+        let target_id = target["targetId"]
+            .as_str()
+            .ok_or("no targetId")?
+            .to_string();
+        let attached = me.browser_call(
+            "Target.attachToTarget",
+            json!({ "targetId": target_id, "flatten": true }),
+        )?;
+        me.session = attached["sessionId"]
+            .as_str()
+            .ok_or("no sessionId")?
+            .to_string();
+        for domain in [
+            "Page.enable",
+            "Runtime.enable",
+            "Network.enable",
+            "Log.enable",
+        ] {
+            me.call(domain, json!({}))?;
+        }
+        Ok(me)
+    }
+
+    fn send(&mut self, method: &str, params: Value, session: Option<&str>) -> Result<Value> {
+        let id = self.next_id;
+        self.next_id += 1;
+        let mut msg = json!({ "id": id, "method": method, "params": params });
+        if let Some(s) = session {
+            msg["sessionId"] = json!(s);
+        }
+        self.ws
+            .send(Message::text(msg.to_string()))
+            .map_err(|e| format!("{method}: send: {e}"))?;
+        loop {
+            let m = self.ws.read().map_err(|e| format!("{method}: read: {e}"))?;
+            let Message::Text(text) = m else { continue };
+            let v: Value =
+                serde_json::from_str(text.as_str()).map_err(|e| format!("bad json: {e}"))?;
+            if v["id"].as_u64() == Some(id) {
+                if let Some(err) = v.get("error") {
+                    return Err(format!("{method}: {err}"));
+                }
+                return Ok(v["result"].clone());
+            }
+            self.note_event(v);
+        }
+    }
+
+    fn note_event(&mut self, v: Value) {
+        match v["method"].as_str().unwrap_or("") {
+            "Runtime.consoleAPICalled"
+                if matches!(v["params"]["type"].as_str(), Some("error" | "assert")) =>
+            {
+                let args = v["params"]["args"].as_array().cloned().unwrap_or_default();
+                let text: Vec<String> = args
+                    .iter()
+                    .map(|a| {
+                        a["value"]
+                            .as_str()
+                            .map_or_else(|| a["description"].to_string(), str::to_string)
+                    })
+                    .collect();
+                self.console_errors
+                    .push(format!("console.error: {}", text.join(" ")));
+            }
+            "Runtime.exceptionThrown" => {
+                let d = &v["params"]["exceptionDetails"];
+                self.console_errors.push(format!(
+                    "exception: {} {}",
+                    d["text"], d["exception"]["description"]
+                ));
+            }
+            "Log.entryAdded" if v["params"]["entry"]["level"].as_str() == Some("error") => {
+                let e = &v["params"]["entry"];
+                self.console_errors
+                    .push(format!("log: {} {}", e["text"], e["url"]));
+            }
+            "Network.requestWillBeSent" => {
+                if let Some(u) = v["params"]["request"]["url"].as_str() {
+                    self.requests.push(u.to_string());
+                }
+            }
+            _ => {}
+        }
+        self.events.push_back(v);
+        if self.events.len() > 2000 {
+            self.events.pop_front();
+        }
+    }
+
+    fn browser_call(&mut self, method: &str, params: Value) -> Result<Value> {
+        self.send(method, params, None)
+    }
+
+    /// A DevTools command on the page.
+    ///
+    /// # Errors
+    /// The protocol's error, or a transport failure.
+    pub fn call(&mut self, method: &str, params: Value) -> Result<Value> {
+        let s = self.session.clone();
+        self.send(method, params, Some(&s))
+    }
+
+    /// Evaluates JavaScript in the page and returns its value (promises are awaited).
+    ///
+    /// # Errors
+    /// When the script throws.
+    pub fn eval(&mut self, js: &str) -> Result<Value> {
+        let r = self.call(
+            "Runtime.evaluate",
+            json!({ "expression": js, "returnByValue": true, "awaitPromise": true }),
+        )?;
+        if let Some(ex) = r.get("exceptionDetails") {
+            return Err(format!(
+                "script failed: {} — {}",
+                ex["exception"]["description"], js
+            ));
+        }
+        Ok(r["result"]["value"].clone())
+    }
+
+    /// Polls `js` until it is truthy.
+    ///
+    /// # Errors
+    /// After `timeout` with the last value seen.
+    pub fn wait_for(&mut self, js: &str, timeout: Duration) -> Result<Value> {
+        let start = Instant::now();
+        loop {
+            let v = self.eval(js)?;
+            let truthy = match &v {
+                Value::Null => false,
+                Value::Bool(b) => *b,
+                Value::String(s) => !s.is_empty(),
+                Value::Number(n) => n.as_f64() != Some(0.0),
+                _ => true,
+            };
+            if truthy {
+                return Ok(v);
+            }
+            if start.elapsed() > timeout {
+                return Err(format!(
+                    "timed out after {timeout:?} waiting for: {js} (last: {v})"
+                ));
+            }
+            std::thread::sleep(Duration::from_millis(40));
+        }
+    }
+
+    /// Opens `url` and waits for the document to finish loading.
+    ///
+    /// # Errors
+    /// On navigation failure or a load timeout.
+    pub fn goto(&mut self, url: &str) -> Result<()> {
+        let r = self.call("Page.navigate", json!({ "url": url }))?;
+        if let Some(e) = r.get("errorText").and_then(Value::as_str) {
+            return Err(format!("navigate {url}: {e}"));
+        }
+        self.wait_for(
+            "document.readyState === 'complete'",
+            Duration::from_secs(30),
+        )?;
+        Ok(())
+    }
+
+    /// Replaces the text of the input `#id` as a user would: focus, select all, type.
+    ///
+    /// # Errors
+    /// When the element is missing.
+    pub fn type_into(&mut self, id: &str, text: &str) -> Result<()> {
+        let found = self.eval(&format!(
+            "(() => {{ const e = document.getElementById({id:?}); if (!e) return false; e.focus(); e.select(); return true; }})()"
+        ))?;
+        if found != Value::Bool(true) {
+            return Err(format!("no input #{id}"));
+        }
+        if text.is_empty() {
+            for kind in ["keyDown", "keyUp"] {
+                self.call(
+                    "Input.dispatchKeyEvent",
+                    json!({ "type": kind, "key": "Backspace", "code": "Backspace", "windowsVirtualKeyCode": 8 }),
+                )?;
+            }
+        } else {
+            self.call("Input.insertText", json!({ "text": text }))?;
+        }
+        Ok(())
+    }
+
+    /// Clicks the element `#id` at its centre with a real mouse event.
+    ///
+    /// # Errors
+    /// When the element is missing or has no box.
+    pub fn click(&mut self, id: &str) -> Result<()> {
+        let r = self.eval(&format!(
+            "(() => {{ const e = document.getElementById({id:?}); if (!e) return null; e.scrollIntoView({{block: 'center'}}); const b = e.getBoundingClientRect(); return [b.x + b.width / 2, b.y + b.height / 2]; }})()"
+        ))?;
+        let (Some(x), Some(y)) = (r[0].as_f64(), r[1].as_f64()) else {
+            return Err(format!("no element #{id} to click"));
+        };
+        for kind in ["mousePressed", "mouseReleased"] {
+            self.call(
+                "Input.dispatchMouseEvent",
+                json!({ "type": kind, "x": x, "y": y, "button": "left", "clickCount": 1 }),
+            )?;
+        }
+        Ok(())
+    }
+
+    /// Console errors, uncaught exceptions and error log entries seen so far.
+    ///
+    /// # Errors
+    /// On a transport failure while flushing pending events.
+    pub fn console_errors(&mut self) -> Result<Vec<String>> {
+        self.eval("0")?;
+        Ok(self.console_errors.clone())
+    }
+
+    /// Every URL the page requested so far.
+    #[must_use]
+    pub fn requests(&self) -> &[String] {
+        &self.requests
+    }
+
+    /// Saves a PNG screenshot of the whole page.
+    ///
+    /// # Errors
+    /// On protocol or file errors.
+    pub fn screenshot(&mut self, path: &Path) -> Result<()> {
+        use base64::Engine as _;
+        let r = self.call(
+            "Page.captureScreenshot",
+            json!({ "format": "png", "captureBeyondViewport": true }),
+        )?;
+        let data = r["data"].as_str().ok_or("no screenshot data")?;
+        let bytes = base64::engine::general_purpose::STANDARD
+            .decode(data)
+            .map_err(|e| e.to_string())?;
+        if let Some(dir) = path.parent() {
+            std::fs::create_dir_all(dir).map_err(|e| e.to_string())?;
+        }
+        std::fs::write(path, bytes).map_err(|e: io::Error| e.to_string())
+    }
+}
+
+impl Drop for Chromium {
+    fn drop(&mut self) {
+        let _ = self.ws.close(None);
+        let _ = self.child.kill();
+        let _ = self.child.wait();
+        let _ = std::fs::remove_dir_all(&self.profile);
+    }
+}

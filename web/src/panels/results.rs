@@ -1,0 +1,333 @@
+//! "Results": every number core gives for the case, grouped, each with its unit. Each value cell
+//! carries `data-key` and the unrounded `data-value` (in the case's unit) for tests and copying.
+
+use crate::case::{Evaluation, Mode};
+use crate::numfmt::{format_sig, RESULT_DIGITS};
+use leptos::prelude::*;
+use nalgebra::Vector3;
+use stresscase_core::AngleUnit;
+
+/// One line of a result table.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Row {
+    /// Stable key for tests, e.g. `sigma1`.
+    pub key: &'static str,
+    /// What it is.
+    pub label: String,
+    /// The unrounded number in the case's unit, where the row is one number.
+    pub value: Option<f64>,
+    /// The text shown, unit included.
+    pub text: String,
+}
+
+/// A titled group of rows.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Group {
+    /// Heading.
+    pub title: &'static str,
+    /// Rows.
+    pub rows: Vec<Row>,
+}
+
+fn num(key: &'static str, label: impl Into<String>, v: f64, unit: &str) -> Row {
+    let text = if unit.is_empty() {
+        format_sig(v, RESULT_DIGITS)
+    } else {
+        format!("{} {unit}", format_sig(v, RESULT_DIGITS))
+    };
+    Row {
+        key,
+        label: label.into(),
+        value: Some(v),
+        text,
+    }
+}
+
+fn deg(key: &'static str, label: impl Into<String>, radians: f64) -> Row {
+    let d = AngleUnit::Degree.from_radians(radians);
+    Row {
+        key,
+        label: label.into(),
+        value: Some(d),
+        text: format!("{}°", format_sig(d, RESULT_DIGITS)),
+    }
+}
+
+fn text(key: &'static str, label: impl Into<String>, t: String) -> Row {
+    Row {
+        key,
+        label: label.into(),
+        value: None,
+        text: t,
+    }
+}
+
+fn vector(v: &Vector3<f64>) -> String {
+    format!(
+        "({}, {}, {})",
+        format_sig(v.x, 4),
+        format_sig(v.y, 4),
+        format_sig(v.z, 4)
+    )
+}
+
+/// All result groups for an evaluation.
+#[must_use]
+pub fn groups(e: &Evaluation) -> Vec<Group> {
+    let u = e.unit.symbol();
+    let u2 = format!("{u}²");
+    let u3 = format!("{u}³");
+    let [s1, s2, s3] = e.principal.values();
+    let [n1, n2, n3] = e.principal.directions();
+    let ip = &e.in_plane;
+    let m = &e.mohr3d;
+    let [tn1, tn2] = m.tau_max_normals();
+    let inv = &e.invariants;
+    let eq = &e.equivalent;
+    let r = &e.rotated;
+    let d = &e.deviatoric;
+    let pr = &e.probe;
+
+    let mut principal = vec![
+        num("sigma1", "σ1", s1, u),
+        num("sigma2", "σ2", s2, u),
+        num("sigma3", "σ3", s3, u),
+        text("n1", "direction of σ1", vector(&n1)),
+        text("n2", "direction of σ2", vector(&n2)),
+        text("n3", "direction of σ3", vector(&n3)),
+    ];
+    let in_plane_title = if e.mode == Mode::Plane {
+        "in-plane"
+    } else {
+        "x–y plane (turns about z)"
+    };
+    principal.push(num(
+        "sigma_a",
+        format!("σa, larger {in_plane_title}"),
+        ip.sigma_a,
+        u,
+    ));
+    principal.push(num(
+        "sigma_b",
+        format!("σb, smaller {in_plane_title}"),
+        ip.sigma_b,
+        u,
+    ));
+    principal.push(deg("theta_p", "θp, x to the σa face", ip.theta_p));
+
+    let mut shear = vec![
+        num(
+            "tau_max",
+            "absolute max shear τmax = (σ1 − σ3)/2",
+            m.tau_max(),
+            u,
+        ),
+        text(
+            "tau_max_planes",
+            "its plane normals (n1 ± n3)/√2",
+            format!("{} and {}", vector(&tn1), vector(&tn2)),
+        ),
+        num(
+            "tau_max_sigma",
+            "normal stress on those planes",
+            m.c13.centre,
+            u,
+        ),
+        num(
+            "tau_in_plane",
+            format!("max {in_plane_title} shear"),
+            ip.radius,
+            u,
+        ),
+        deg("theta_s", "θs, x to the face with τx′y′ = +max", ip.theta_s),
+    ];
+    if e.out_of_plane_governs {
+        shear.push(text(
+            "out_of_plane_warning",
+            "note",
+            format!(
+                "τmax acts out of the x–y plane and exceeds the in-plane maximum ({} vs {} {u}): σz = 0 is the {} principal stress.",
+                format_sig(m.tau_max(), 4),
+                format_sig(ip.radius, 4),
+                if s3 >= 0.0 { "smallest" } else { "largest" }
+            ),
+        ));
+    }
+
+    let mut turned = vec![
+        num("sx_t", "σx′", r.sx(), u),
+        num("sy_t", "σy′", r.sy(), u),
+        num("txy_t", "τx′y′", r.txy(), u),
+    ];
+    if e.mode == Mode::Full {
+        turned.push(num("sz_t", "σz", r.sz(), u));
+        turned.push(num("tzx_t", "τx′z", r.tzx(), u));
+        turned.push(num("tyz_t", "τy′z", r.tyz(), u));
+    }
+
+    let none = || "undefined (hydrostatic state)".to_string();
+    let equivalent = vec![
+        num("von_mises", "von Mises σvm", eq.von_mises, u),
+        num("tresca", "Tresca intensity σ1 − σ3", eq.tresca, u),
+        num(
+            "oct_normal",
+            "octahedral normal σoct",
+            eq.octahedral_normal,
+            u,
+        ),
+        num("oct_shear", "octahedral shear τoct", eq.octahedral_shear, u),
+        match eq.triaxiality {
+            Some(t) => num("triaxiality", "triaxiality η = σm/σvm", t, ""),
+            None => text("triaxiality", "triaxiality η = σm/σvm", none()),
+        },
+        match eq.lode_angle {
+            Some(a) => deg("lode", "Lode angle θL", a),
+            None => text("lode", "Lode angle θL", none()),
+        },
+    ];
+
+    let invariants = vec![
+        num("i1", "I1", inv.i1, u),
+        num("i2", "I2", inv.i2, &u2),
+        num("i3", "I3", inv.i3, &u3),
+        num("j2", "J2", inv.j2, &u2),
+        num("j3", "J3", inv.j3, &u3),
+        num("mean", "mean stress σm", inv.mean, u),
+        text(
+            "deviatoric",
+            "deviator sx, sy, sz, sxy, syz, szx",
+            format!(
+                "{}, {}, {}, {}, {}, {} {u}",
+                format_sig(d.sx(), 4),
+                format_sig(d.sy(), 4),
+                format_sig(d.sz(), 4),
+                format_sig(d.txy(), 4),
+                format_sig(d.tyz(), 4),
+                format_sig(d.tzx(), 4)
+            ),
+        ),
+    ];
+
+    let probe = vec![
+        text("probe_n", "unit normal n", vector(&pr.normal_vector)),
+        text(
+            "probe_t",
+            format!("traction t = σ·n ({u})"),
+            vector(&pr.traction),
+        ),
+        num("probe_sigma", "normal stress σn", pr.normal, u),
+        num("probe_tau", "shear stress |τn|", pr.shear, u),
+        text(
+            "probe_dir",
+            "shear direction",
+            pr.shear_direction
+                .map_or_else(|| "none (principal plane)".into(), |v| vector(&v)),
+        ),
+    ];
+
+    vec![
+        Group {
+            title: "Principal stresses",
+            rows: principal,
+        },
+        Group {
+            title: "Shear",
+            rows: shear,
+        },
+        Group {
+            title: "Element turned by θ",
+            rows: turned,
+        },
+        Group {
+            title: "Equivalent stresses",
+            rows: equivalent,
+        },
+        Group {
+            title: "Invariants",
+            rows: invariants,
+        },
+        Group {
+            title: "Plane by its normal",
+            rows: probe,
+        },
+    ]
+}
+
+/// The results tables.
+#[component]
+pub fn ResultsPanel(shown: Memo<Option<Evaluation>>, stale: Memo<bool>) -> impl IntoView {
+    let content = move || {
+        shown.with(|s| {
+            s.as_ref().map(|e| {
+                groups(e)
+                    .into_iter()
+                    .map(|g| {
+                        let rows = g
+                            .rows
+                            .into_iter()
+                            .map(|r| {
+                                let raw = r.value.map(|v| format!("{v:e}")).unwrap_or_default();
+                                view! {
+                                    <tr>
+                                        <th scope="row">{r.label}</th>
+                                        <td class="num" data-key=r.key data-value=raw>{r.text}</td>
+                                    </tr>
+                                }
+                            })
+                            .collect_view();
+                        view! {
+                            <table class="result-group">
+                                <caption>{g.title}</caption>
+                                <tbody>{rows}</tbody>
+                            </table>
+                        }
+                    })
+                    .collect_view()
+            })
+        })
+    };
+    view! {
+        <section class="panel results" id="panel-results" class:stale=move || stale.get()>
+            <h2>"Results" {move || stale.get().then_some(" — stale, last valid input")}</h2>
+            <div class="result-grid">{content}</div>
+        </section>
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::case::{CaseForm, Field};
+
+    #[test]
+    fn every_number_has_a_unit_or_is_dimensionless_by_design() {
+        let e = CaseForm::demo().evaluate().unwrap();
+        for g in groups(&e) {
+            for r in g.rows {
+                if r.value.is_some() && r.key != "triaxiality" {
+                    assert!(
+                        r.text.contains("MPa") || r.text.ends_with('°'),
+                        "{} has no unit: {}",
+                        r.key,
+                        r.text
+                    );
+                }
+            }
+        }
+    }
+
+    #[test]
+    fn equal_biaxial_warns_about_out_of_plane_shear() {
+        let mut f = CaseForm::demo();
+        f.set_text(Field::Sx, "50".into());
+        f.set_text(Field::Sy, "50".into());
+        f.set_text(Field::Txy, "0".into());
+        let e = f.evaluate().unwrap();
+        let keys: Vec<_> = groups(&e)
+            .into_iter()
+            .flat_map(|g| g.rows)
+            .map(|r| r.key)
+            .collect();
+        assert!(keys.contains(&"out_of_plane_warning"));
+    }
+}
