@@ -151,6 +151,31 @@ fn plane_case_typed_in_matches_core() {
         p.check_circle(role, c.centre, c.radius);
     }
     p.check_circle("inplane", ip.centre, ip.radius);
+    // Principal points sit on the σ axis at core's values, labelled with value and unit.
+    for (role, v) in [("s1", pr[0]), ("s3", pr[2])] {
+        let (ox, oy, k, ..) = p.circle("c13");
+        let js = format!("(() => {{ const g = document.querySelector('g[data-role=\"{role}\"]'); return [+g.querySelector('circle').getAttribute('cx'), +g.querySelector('circle').getAttribute('cy'), g.textContent]; }})()");
+        let got = p.b.eval(&js).unwrap();
+        close(
+            role,
+            "σ from the point's cx",
+            (got[0].as_f64().unwrap() - ox) / k,
+            v,
+            1e-6 / k,
+        );
+        close(
+            role,
+            "point on the σ axis",
+            got[1].as_f64().unwrap(),
+            oy,
+            1e-9,
+        );
+        assert!(
+            got[2].as_str().unwrap().ends_with("MPa"),
+            "label {}",
+            got[2]
+        );
+    }
     p.no_console_errors();
     p.shot("plane-case");
 }

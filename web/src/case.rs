@@ -7,7 +7,9 @@ use nalgebra::Vector3;
 use stresscase_core::equivalent::Equivalent;
 use stresscase_core::invariants::{deviatoric, Invariants};
 use stresscase_core::transform::{face_normal_about_z, rotate_about_z, InPlane, PlaneTraction};
-use stresscase_core::{Mohr3d, PlaneMohr, Principal, ShearAxis, StressTensor, StressUnit};
+use stresscase_core::{
+    AngleUnit, Mohr3d, PlaneMohr, Principal, ShearAxis, StressTensor, StressUnit,
+};
 
 /// Plane stress (σz = τyz = τzx = 0) or the full 3D tensor.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
@@ -118,8 +120,10 @@ pub struct CaseForm {
     pub unit: StressUnit,
     /// σx, σy, σz, τxy, τyz, τzx as typed.
     pub stress: [String; 6],
-    /// Element turn θ in degrees, counter-clockwise positive, as typed.
+    /// Element turn θ in `angle_unit`, counter-clockwise positive, as typed.
     pub angle: String,
+    /// Unit of θ and of every angle shown.
+    pub angle_unit: AngleUnit,
     /// Plane normal components as typed (any length; normalised).
     pub normal: [String; 3],
     /// How positive shear is drawn.
@@ -148,6 +152,7 @@ impl CaseForm {
             unit: StressUnit::MPa,
             stress,
             angle: "30".into(),
+            angle_unit: AngleUnit::Degree,
             normal: ["1".into(), "1".into(), "1".into()],
             shear_axis: ShearAxis::PositiveDown,
         }
@@ -199,6 +204,24 @@ impl CaseForm {
         self.unit = to;
     }
 
+    /// Changes the angle unit, converting θ if it reads as a number.
+    pub fn change_angle_unit(&mut self, to: AngleUnit) {
+        if let Ok(v) = parse_number(&self.angle) {
+            self.angle = format_for_entry(to.from_radians(self.angle_unit.to_radians(v)));
+        }
+        self.angle_unit = to;
+    }
+
+    /// Sets θ from radians, rounded for display (0.01° or 1e-4 rad).
+    pub fn set_angle_radians(&mut self, radians: f64) {
+        let v = self.angle_unit.from_radians(radians);
+        let step = match self.angle_unit {
+            AngleUnit::Degree => 100.0,
+            AngleUnit::Radian => 10_000.0,
+        };
+        self.angle = format_for_entry((v * step).round() / step);
+    }
+
     /// Sets all six stress fields at once (as if typed in the current unit).
     #[cfg(test)]
     pub fn set_stress(&mut self, values: [String; 6]) {
@@ -238,7 +261,7 @@ impl CaseForm {
             }
         };
         let c = Field::STRESS.map(&mut read);
-        let angle_deg = read(Field::Angle);
+        let angle = read(Field::Angle);
         let n = Field::NORMAL.map(&mut read);
         if !problems.is_empty() {
             return Err(problems);
@@ -251,14 +274,23 @@ impl CaseForm {
         };
         let tensor = StressTensor::new(c[0], c[1], c[2], c[3], c[4], c[5])
             .map_err(|e| fail(Field::Sx, e))?;
-        let theta = angle_deg.to_radians();
+        let theta = self.angle_unit.to_radians(angle);
         let probe = PlaneTraction::on(&tensor, Vector3::new(n[0], n[1], n[2]))
             .map_err(|e| fail(Field::Nx, e))?;
         let plane_mohr = PlaneMohr::of(&tensor, theta).map_err(|e| fail(Field::Angle, e))?;
         let rotated = rotate_about_z(&tensor, theta).map_err(|e| fail(Field::Angle, e))?;
         let deviatoric = deviatoric(&tensor).map_err(|e| fail(Field::Sx, e))?;
-        let x_face_3d = PlaneTraction::on(&tensor, face_normal_about_z(theta))
-            .map_err(|e| fail(Field::Angle, e))?;
+        let face = |angle: f64| {
+            PlaneTraction::on(&tensor, face_normal_about_z(angle))
+                .map_err(|e| fail(Field::Angle, e))
+        };
+        let half_turn = core::f64::consts::FRAC_PI_2;
+        let faces_3d = [
+            face(0.0)?,
+            face(half_turn)?,
+            face(theta)?,
+            face(theta + half_turn)?,
+        ];
         let mohr3d = Mohr3d::of(&tensor);
         let in_plane = InPlane::of(&tensor);
         Ok(Evaluation {
@@ -278,7 +310,8 @@ impl CaseForm {
             equivalent: Equivalent::of(&tensor),
             rotated,
             probe,
-            x_face_3d,
+            faces_3d,
+            angle_unit: self.angle_unit,
         })
     }
 }
@@ -320,8 +353,11 @@ pub struct Evaluation {
     pub rotated: StressTensor,
     /// Traction on the plane with the entered normal.
     pub probe: PlaneTraction,
-    /// Traction on the turned element's x′ face (normal (cos θ, sin θ, 0)), for the 3D diagram.
-    pub x_face_3d: PlaneTraction,
+    /// Tractions on the x, y, x′ and y′ faces (normals in the x–y plane), for the 3D diagram,
+    /// where a face plots at (σn, |τn|).
+    pub faces_3d: [PlaneTraction; 4],
+    /// Unit for angles shown.
+    pub angle_unit: AngleUnit,
 }
 
 #[cfg(test)]
@@ -389,6 +425,17 @@ mod tests {
         f.set_text(Field::Sy, "oops".into());
         f.change_unit(StressUnit::Ksi);
         assert_eq!(f.text(Field::Sy), "oops");
+    }
+
+    #[test]
+    fn angle_unit_change_keeps_the_turn() {
+        let mut f = CaseForm::demo();
+        let before = f.evaluate().unwrap().theta;
+        f.change_angle_unit(AngleUnit::Radian);
+        assert!(f.angle.starts_with("0.5235987"), "{}", f.angle);
+        assert!((f.evaluate().unwrap().theta - before).abs() < 1e-11);
+        f.set_angle_radians(1.0);
+        assert_eq!(f.angle, "1");
     }
 
     #[test]

@@ -3,7 +3,6 @@
 
 use crate::case::{CaseForm, Evaluation, Field};
 use crate::entry::parse_number;
-use crate::numfmt::format_for_entry;
 use crate::panels::number_field::NumberField;
 use leptos::prelude::*;
 use stresscase_core::AngleUnit;
@@ -13,15 +12,40 @@ use stresscase_core::AngleUnit;
 pub fn ElementTurn(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
     let jump = move |pick: fn(&Evaluation) -> f64| {
         if let Some(e) = shown.get_untracked() {
-            let deg = AngleUnit::Degree.from_radians(pick(&e));
-            form.update(|f| f.angle = format_for_entry((deg * 100.0).round() / 100.0));
+            form.update(|f| f.set_angle_radians(pick(&e)));
         }
+    };
+    // The slider spans a half turn either way in the current unit.
+    let span = move || form.with(|f| f.angle_unit.from_radians(core::f64::consts::PI));
+    let step = move || {
+        form.with(|f| {
+            if f.angle_unit == AngleUnit::Degree {
+                0.5
+            } else {
+                0.005
+            }
+        })
     };
     view! {
         <fieldset class="panel" id="panel-turn">
             <legend>"Turn the element"</legend>
-            <NumberField form=form field=Field::Angle/>
-            <input type="range" id="angle-slider" min="-180" max="180" step="0.5" aria-label="θ in degrees"
+            <div class="angle-row">
+                <NumberField form=form field=Field::Angle/>
+                <label class="unit-pick">
+                    "in "
+                    <select id="angle-unit"
+                        prop:value=move || form.with(|f| if f.angle_unit == AngleUnit::Degree { "deg" } else { "rad" })
+                        on:change:target=move |ev| {
+                            let to = if ev.target().value() == "rad" { AngleUnit::Radian } else { AngleUnit::Degree };
+                            form.update(|f| f.change_angle_unit(to));
+                        }>
+                        <option value="deg">"degrees"</option>
+                        <option value="rad">"radians"</option>
+                    </select>
+                </label>
+            </div>
+            <input type="range" id="angle-slider" aria-label="θ"
+                prop:min=move || format!("{}", -span()) prop:max=move || format!("{}", span()) prop:step=move || step().to_string()
                 prop:value=move || form.with(|f| parse_number(&f.angle).map(|v| v.to_string()).unwrap_or_default())
                 on:input:target=move |ev| form.update(|f| f.angle = ev.target().value())/>
             <div class="buttons">

@@ -121,8 +121,9 @@ pub fn picture(e: &Evaluation) -> Picture {
     let pm = &e.plane_mohr;
     let plane = e.mode == Mode::Plane;
 
-    let mut lo = s3.min(0.0).min(e.probe.normal);
-    let mut hi = s1.max(0.0).max(e.probe.normal);
+    let lo = s3.min(0.0).min(e.probe.normal);
+    let hi = s1.max(0.0).max(e.probe.normal);
+    let (mut lo, mut hi) = (lo, hi);
     if plane {
         for p in [pm.x_face, pm.y_face] {
             lo = lo.min(p.sigma);
@@ -209,15 +210,25 @@ pub fn picture(e: &Evaluation) -> Picture {
             });
         }
     } else {
-        let (tx, ty) = at(e.x_face_3d.normal, e.x_face_3d.shear);
-        points.push(PointMark {
-            role: "Xt",
-            kind: PointKind::Turned,
-            x: tx,
-            y: ty,
-            label: "X′".into(),
-            offset: (8.0, 14.0),
-        });
+        // In 3D a face plots at (σn, |τn|): its total shear, in-plane and out-of-plane together.
+        let marks = [
+            ("X", PointKind::Face, "X"),
+            ("Y", PointKind::Face, "Y"),
+            ("Xt", PointKind::Turned, "X′"),
+            ("Yt", PointKind::Turned, "Y′"),
+        ];
+        for (face, (role, kind, label)) in e.faces_3d.iter().zip(marks) {
+            let (x, y) = at(face.normal, face.shear);
+            let dy = if kind == PointKind::Face { -8.0 } else { 14.0 };
+            points.push(PointMark {
+                role,
+                kind,
+                x,
+                y,
+                label: label.into(),
+                offset: (8.0, dy),
+            });
+        }
     }
 
     let labels = [("s1", "σ1", s1), ("s2", "σ2", s2), ("s3", "σ3", s3)];
@@ -431,6 +442,40 @@ mod tests {
             assert!(
                 c.cy - c.r >= FRAME.top - 1e-6 && c.cy + c.r <= FRAME.top + FRAME.height + 1e-6
             );
+        }
+    }
+
+    #[test]
+    fn principal_and_shear_points_are_labelled_with_value_and_unit() {
+        for mode in [Mode::Plane, Mode::Full] {
+            let mut f = CaseForm::demo();
+            f.mode = mode;
+            let e = f.evaluate().unwrap();
+            let p = picture(&e);
+            let [s1, s2, s3] = e.principal.values();
+            for (role, v) in [
+                ("s1", s1),
+                ("s2", s2),
+                ("s3", s3),
+                ("tmax", e.mohr3d.tau_max()),
+            ] {
+                let m = p
+                    .points
+                    .iter()
+                    .find(|m| m.role == role)
+                    .unwrap_or_else(|| panic!("{mode:?}: no {role}"));
+                assert!(
+                    m.label.contains(&format_sig(v, 4)) && m.label.ends_with("MPa"),
+                    "{role}: {}",
+                    m.label
+                );
+            }
+            for role in ["X", "Y", "Xt", "Yt", "N"] {
+                assert!(
+                    p.points.iter().any(|m| m.role == role),
+                    "{mode:?}: no {role}"
+                );
+            }
         }
     }
 

@@ -6,7 +6,7 @@ use leptos::prelude::*;
 /// The unit text beside a field.
 fn unit_of(form: &CaseForm, field: Field) -> String {
     match field {
-        Field::Angle => "°".into(),
+        Field::Angle => form.angle_unit.symbol().into(),
         Field::Nx | Field::Ny | Field::Nz => String::new(),
         _ => form.unit.symbol().into(),
     }

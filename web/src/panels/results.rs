@@ -43,13 +43,17 @@ fn num(key: &'static str, label: impl Into<String>, v: f64, unit: &str) -> Row {
     }
 }
 
-fn deg(key: &'static str, label: impl Into<String>, radians: f64) -> Row {
-    let d = AngleUnit::Degree.from_radians(radians);
+fn angle(key: &'static str, label: impl Into<String>, radians: f64, unit: AngleUnit) -> Row {
+    let v = unit.from_radians(radians);
+    let text = match unit {
+        AngleUnit::Degree => format!("{}°", format_sig(v, RESULT_DIGITS)),
+        AngleUnit::Radian => format!("{} rad", format_sig(v, RESULT_DIGITS)),
+    };
     Row {
         key,
         label: label.into(),
-        value: Some(d),
-        text: format!("{}°", format_sig(d, RESULT_DIGITS)),
+        value: Some(v),
+        text,
     }
 }
 
@@ -75,6 +79,7 @@ fn vector(v: &Vector3<f64>) -> String {
 #[must_use]
 pub fn groups(e: &Evaluation) -> Vec<Group> {
     let u = e.unit.symbol();
+    let au = e.angle_unit;
     let u2 = format!("{u}²");
     let u3 = format!("{u}³");
     let [s1, s2, s3] = e.principal.values();
@@ -113,7 +118,7 @@ pub fn groups(e: &Evaluation) -> Vec<Group> {
         ip.sigma_b,
         u,
     ));
-    principal.push(deg("theta_p", "θp, x to the σa face", ip.theta_p));
+    principal.push(angle("theta_p", "θp, x to the σa face", ip.theta_p, au));
 
     let mut shear = vec![
         num(
@@ -139,7 +144,12 @@ pub fn groups(e: &Evaluation) -> Vec<Group> {
             ip.radius,
             u,
         ),
-        deg("theta_s", "θs, x to the face with τx′y′ = +max", ip.theta_s),
+        angle(
+            "theta_s",
+            "θs, x to the face with τx′y′ = +max",
+            ip.theta_s,
+            au,
+        ),
     ];
     if e.out_of_plane_governs {
         shear.push(text(
@@ -181,7 +191,7 @@ pub fn groups(e: &Evaluation) -> Vec<Group> {
             None => text("triaxiality", "triaxiality η = σm/σvm", none()),
         },
         match eq.lode_angle {
-            Some(a) => deg("lode", "Lode angle θL", a),
+            Some(a) => angle("lode", "Lode angle θL", a, au),
             None => text("lode", "Lode angle θL", none()),
         },
     ];
@@ -270,7 +280,7 @@ pub fn ResultsPanel(shown: Memo<Option<Evaluation>>, stale: Memo<bool>) -> impl 
                                 view! {
                                     <tr>
                                         <th scope="row">{r.label}</th>
-                                        <td class="num" data-key=r.key data-value=raw>{r.text}</td>
+                                        <td class=if r.value.is_some() { "num" } else { "txt" } data-key=r.key data-value=raw>{r.text}</td>
                                     </tr>
                                 }
                             })

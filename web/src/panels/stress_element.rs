@@ -5,10 +5,10 @@ use crate::case::{Evaluation, Mode};
 use crate::numfmt::format_sig;
 use leptos::prelude::*;
 
-const SIZE: f64 = 360.0;
+const SIZE: f64 = 400.0;
 const C: f64 = SIZE / 2.0;
-const HALF: f64 = 52.0;
-const LONGEST: f64 = 70.0;
+const HALF: f64 = 56.0;
+const LONGEST: f64 = 74.0;
 
 /// One arrow in pixels.
 #[derive(Debug, Clone, PartialEq)]
@@ -187,7 +187,7 @@ fn draw(e: &Evaluation, p: &ElementPicture) -> impl IntoView {
             <polygon class="square" points=corners/>
             {arrows}
             {labels}
-            <text class="theta-label" x="10" y=SIZE - 12.0>{format!("θ = {}°", format_sig(p.theta_deg, 4))}</text>
+            <text class="theta-label" x="10" y=SIZE - 12.0>{format!("θ = {}° counter-clockwise", format_sig(p.theta_deg, 4))}</text>
         </svg>
         {out_of_plane}
     }
