@@ -224,6 +224,7 @@ fn serve() -> Result {
             "127.0.0.1",
             "--port",
             "8080",
+            "--disable-address-lookup",
         ],
     )
 }
