@@ -6,116 +6,11 @@
 //! `STRESSCASE_DIST` points at another build.
 
 use serde_json::Value;
-use std::path::PathBuf;
-use std::time::Duration;
 use stresscase_core::equivalent::Equivalent;
 use stresscase_core::transform::{rotate_about_z, InPlane};
 use stresscase_core::{Mohr3d, Principal, StressTensor, StressUnit};
-use stresscase_tests::browser::Chromium;
-use stresscase_tests::check::{close, target_dir};
-use stresscase_tests::serve::StaticServer;
-
-const WAIT: Duration = Duration::from_secs(20);
-
-fn dist() -> PathBuf {
-    let d = std::env::var_os("STRESSCASE_DIST").map_or_else(
-        || PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("../dist"),
-        PathBuf::from,
-    );
-    assert!(
-        d.join("index.html").is_file(),
-        "no built page at {} — run `cargo xtask test`",
-        d.display()
-    );
-    d
-}
-
-struct Page {
-    b: Chromium,
-    _server: StaticServer,
-}
-
-impl Page {
-    fn open() -> Self {
-        let server = StaticServer::start(&dist(), "/").expect("serve dist");
-        let mut b = Chromium::launch().expect("launch chromium");
-        b.goto(&server.url).expect("open page");
-        b.wait_for(
-            "document.querySelector('td[data-key=\"sigma1\"]') !== null",
-            WAIT,
-        )
-        .expect("page computes");
-        Self { b, _server: server }
-    }
-
-    fn value(&mut self, key: &str) -> f64 {
-        let v = self
-            .b
-            .eval(&format!(
-                "document.querySelector('td[data-key=\"{key}\"]')?.dataset.value ?? null"
-            ))
-            .expect("read value");
-        v.as_str()
-            .and_then(|s| s.parse().ok())
-            .unwrap_or_else(|| panic!("no numeric value for {key}: {v}"))
-    }
-
-    fn text(&mut self, js: &str) -> String {
-        self.b
-            .eval(js)
-            .expect("eval")
-            .as_str()
-            .unwrap_or_default()
-            .to_string()
-    }
-
-    /// Waits until the result `key` shows `want` (relative 1e-9), then returns it.
-    fn wait_value(&mut self, key: &str, want: f64) -> f64 {
-        let js = format!(
-            "(() => {{ const v = +document.querySelector('td[data-key=\"{key}\"]')?.dataset.value; return Math.abs(v - ({want:e})) <= 1e-9 * Math.max(1, Math.abs({want:e})); }})()"
-        );
-        if let Err(e) = self.b.wait_for(&js, WAIT) {
-            let got = self.value(key);
-            panic!("{key}: page shows {got:e}, core says {want:e}: {e}");
-        }
-        self.value(key)
-    }
-
-    fn circle(&mut self, role: &str) -> (f64, f64, f64, f64, f64, f64) {
-        let v: Value = self
-            .b
-            .eval(&format!(
-                "(() => {{ const s = document.getElementById('mohr-svg'); const c = s.querySelector('circle[data-role=\"{role}\"]'); \
-                 return [+s.dataset.originX, +s.dataset.originY, +s.dataset.pxPerUnit, +c.getAttribute('cx'), +c.getAttribute('cy'), +c.getAttribute('r')]; }})()"
-            ))
-            .expect("read circle");
-        let f = |i: usize| v[i].as_f64().unwrap_or(f64::NAN);
-        (f(0), f(1), f(2), f(3), f(4), f(5))
-    }
-
-    /// Checks the drawn circle `role` has core's centre and radius (in the page's unit).
-    fn check_circle(&mut self, role: &str, centre: f64, radius: f64) {
-        let (ox, oy, k, cx, cy, r) = self.circle(role);
-        let px_tol = 1e-6 * (1.0 + cx.abs());
-        close(role, "centre (from cx)", (cx - ox) / k, centre, px_tol / k);
-        close(role, "radius (from r)", r / k, radius, px_tol / k);
-        close(role, "cy on the σ axis", cy, oy, 1e-9);
-        assert!(
-            cx - r >= 0.0 && cx + r <= 720.0,
-            "{role} leaves the drawing: cx {cx}, r {r}"
-        );
-    }
-
-    fn no_console_errors(&mut self) {
-        let errs = self.b.console_errors().expect("console");
-        assert!(errs.is_empty(), "console errors: {errs:#?}");
-    }
-
-    fn shot(&mut self, name: &str) {
-        let path = target_dir().join("browser").join(format!("{name}.png"));
-        self.b.screenshot(&path).expect("screenshot");
-    }
-}
+use stresscase_tests::check::close;
+use stresscase_tests::page::{Page, WAIT};
 
 #[test]
 #[ignore = "needs the built page: run `cargo xtask test`"]

@@ -20,12 +20,22 @@ pub type Result<T> = std::result::Result<T, String>;
 pub struct Chromium {
     child: Child,
     profile: PathBuf,
+    keep_profile: bool,
     ws: WebSocket<MaybeTlsStream<TcpStream>>,
     session: String,
     next_id: u64,
     events: VecDeque<Value>,
     console_errors: Vec<String>,
     requests: Vec<String>,
+    service_worker_responses: Vec<String>,
+}
+
+/// A new, unused profile folder under `target/browser-profiles/`.
+#[must_use]
+pub fn fresh_profile() -> PathBuf {
+    static COUNT: std::sync::atomic::AtomicUsize = std::sync::atomic::AtomicUsize::new(0);
+    let n = COUNT.fetch_add(1, std::sync::atomic::Ordering::SeqCst);
+    crate::check::target_dir().join(format!("browser-profiles/p{}-{n}", std::process::id()))
 }
 
 /// The Chromium binary: `$CHROMIUM`, else the Debian path.
@@ -40,12 +50,19 @@ impl Chromium {
     /// # Errors
     /// When the browser is missing, does not start, or does not answer within 30 s.
     pub fn launch() -> Result<Self> {
-        static COUNT: std::sync::atomic::AtomicUsize = std::sync::atomic::AtomicUsize::new(0);
-        let n = COUNT.fetch_add(1, std::sync::atomic::Ordering::SeqCst);
-        let profile = crate::check::target_dir()
-            .join(format!("browser-profiles/p{}-{n}", std::process::id()));
+        let profile = fresh_profile();
         let _ = std::fs::remove_dir_all(&profile);
+        Self::launch_with_profile(profile, false)
+    }
+
+    /// Starts Chromium on an existing profile folder (to test what survives a browser restart).
+    /// With `keep`, the folder is left in place when the browser is dropped.
+    ///
+    /// # Errors
+    /// As [`launch`](Self::launch).
+    pub fn launch_with_profile(profile: PathBuf, keep: bool) -> Result<Self> {
         std::fs::create_dir_all(&profile).map_err(|e| format!("profile dir: {e}"))?;
+        let _ = std::fs::remove_file(profile.join("DevToolsActivePort"));
         let bin = chromium_path();
         let child = Command::new(&bin)
             .args([
@@ -98,6 +115,7 @@ impl Chromium {
         }
         let mut me = Self {
             child,
+            keep_profile: keep,
             profile,
             ws,
             session: String::new(),
@@ -105,6 +123,7 @@ impl Chromium {
             events: VecDeque::new(),
             console_errors: Vec::new(),
             requests: Vec::new(),
+            service_worker_responses: Vec::new(),
         };
         let target = me.browser_call("Target.createTarget", json!({ "url": "about:blank" }))?;
         let target_id = target["targetId"]
@@ -183,6 +202,13 @@ impl Chromium {
                 let e = &v["params"]["entry"];
                 self.console_errors
                     .push(format!("log: {} {}", e["text"], e["url"]));
+            }
+            "Network.responseReceived"
+                if v["params"]["response"]["fromServiceWorker"] == json!(true) =>
+            {
+                if let Some(u) = v["params"]["response"]["url"].as_str() {
+                    self.service_worker_responses.push(u.to_string());
+                }
             }
             "Network.requestWillBeSent" => {
                 if let Some(u) = v["params"]["request"]["url"].as_str() {
@@ -315,6 +341,127 @@ impl Chromium {
         Ok(())
     }
 
+    /// Reloads the page and waits for it to load.
+    ///
+    /// # Errors
+    /// On protocol failure or a load timeout.
+    pub fn reload(&mut self) -> Result<()> {
+        self.call("Page.reload", json!({ "ignoreCache": false }))?;
+        std::thread::sleep(Duration::from_millis(200));
+        self.wait_for(
+            "document.readyState === 'complete'",
+            Duration::from_secs(30),
+        )
+        .map(|_| ())
+    }
+
+    /// Runs `js` in every new document before the page's own scripts.
+    ///
+    /// # Errors
+    /// On protocol failure.
+    pub fn add_init_script(&mut self, js: &str) -> Result<()> {
+        self.call(
+            "Page.addScriptToEvaluateOnNewDocument",
+            json!({ "source": js }),
+        )
+        .map(|_| ())
+    }
+
+    /// Cuts (or restores) the network, as DevTools' offline mode does, for the page and for
+    /// every service worker running (a worker's fetches do not pass through the page).
+    ///
+    /// # Errors
+    /// On protocol failure.
+    pub fn set_offline(&mut self, offline: bool) -> Result<()> {
+        let conditions = json!({ "offline": offline, "latency": 0, "downloadThroughput": -1, "uploadThroughput": -1 });
+        self.call("Network.emulateNetworkConditions", conditions.clone())?;
+        let targets = self.browser_call("Target.getTargets", json!({}))?;
+        let workers: Vec<String> = targets["targetInfos"]
+            .as_array()
+            .into_iter()
+            .flatten()
+            .filter(|t| t["type"] == "service_worker")
+            .filter_map(|t| t["targetId"].as_str().map(str::to_string))
+            .collect();
+        for id in workers {
+            let attached = self.browser_call(
+                "Target.attachToTarget",
+                json!({ "targetId": id, "flatten": true }),
+            )?;
+            let session = attached["sessionId"]
+                .as_str()
+                .ok_or("no worker session")?
+                .to_string();
+            self.send("Network.enable", json!({}), Some(&session))?;
+            self.send(
+                "Network.emulateNetworkConditions",
+                conditions.clone(),
+                Some(&session),
+            )?;
+        }
+        Ok(())
+    }
+
+    /// The DevTools events named `method` seen so far (kept: the last 2000 events).
+    #[must_use]
+    pub fn events_named(&self, method: &str) -> Vec<Value> {
+        self.events
+            .iter()
+            .filter(|e| e["method"] == method)
+            .map(|e| e["params"].clone())
+            .collect()
+    }
+
+    /// Saves downloads into `dir` without asking.
+    ///
+    /// # Errors
+    /// On protocol failure.
+    pub fn allow_downloads(&mut self, dir: &Path) -> Result<()> {
+        std::fs::create_dir_all(dir).map_err(|e| e.to_string())?;
+        self.browser_call(
+            "Browser.setDownloadBehavior",
+            json!({ "behavior": "allow", "downloadPath": dir.to_string_lossy(), "eventsEnabled": true }),
+        )
+        .map(|_| ())
+    }
+
+    /// Grants clipboard access to the page.
+    ///
+    /// # Errors
+    /// On protocol failure.
+    pub fn grant_clipboard(&mut self) -> Result<()> {
+        self.browser_call(
+            "Browser.grantPermissions",
+            json!({ "permissions": ["clipboardReadWrite", "clipboardSanitizedWrite"] }),
+        )
+        .map(|_| ())
+    }
+
+    /// Chooses `file` in the file input `#id`, as a user picking it would, and fires `change`.
+    ///
+    /// # Errors
+    /// When the input is missing.
+    pub fn choose_file(&mut self, id: &str, file: &Path) -> Result<()> {
+        let doc = self.call("DOM.getDocument", json!({ "depth": 0 }))?;
+        let root = doc["root"]["nodeId"].as_i64().ok_or("no document node")?;
+        let found = self.call(
+            "DOM.querySelector",
+            json!({ "nodeId": root, "selector": format!("#{id}") }),
+        )?;
+        let node = found["nodeId"]
+            .as_i64()
+            .filter(|&n| n != 0)
+            .ok_or_else(|| format!("no #{id}"))?;
+        let file = file
+            .canonicalize()
+            .map_err(|e| format!("{}: {e}", file.display()))?;
+        self.call(
+            "DOM.setFileInputFiles",
+            json!({ "nodeId": node, "files": [file.to_string_lossy()] }),
+        )?;
+        Ok(())
+    }
+
     /// Console errors, uncaught exceptions and error log entries seen so far.
     ///
     /// # Errors
@@ -322,6 +469,12 @@ impl Chromium {
     pub fn console_errors(&mut self) -> Result<Vec<String>> {
         self.eval("0")?;
         Ok(self.console_errors.clone())
+    }
+
+    /// URLs whose responses the page got from its service worker.
+    #[must_use]
+    pub fn service_worker_responses(&self) -> &[String] {
+        &self.service_worker_responses
     }
 
     /// Every URL the page requested so far.
@@ -353,9 +506,20 @@ impl Chromium {
 
 impl Drop for Chromium {
     fn drop(&mut self) {
-        let _ = self.ws.close(None);
+        // Close like a user would, so the profile (local storage included) is written to disk;
+        // kill only if it does not exit within 10 s.
+        let _ = self.browser_call("Browser.close", json!({}));
+        let start = Instant::now();
+        while start.elapsed() < Duration::from_secs(10) {
+            if matches!(self.child.try_wait(), Ok(Some(_))) {
+                break;
+            }
+            std::thread::sleep(Duration::from_millis(50));
+        }
         let _ = self.child.kill();
         let _ = self.child.wait();
-        let _ = std::fs::remove_dir_all(&self.profile);
+        if !self.keep_profile {
+            let _ = std::fs::remove_dir_all(&self.profile);
+        }
     }
 }

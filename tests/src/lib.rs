@@ -3,4 +3,5 @@
 
 pub mod browser;
 pub mod check;
+pub mod page;
 pub mod serve;

@@ -9,6 +9,7 @@ pub struct StaticServer {
     /// Base URL including the mount prefix, ending in `/`.
     pub url: String,
     server: std::sync::Arc<tiny_http::Server>,
+    hits: std::sync::Arc<std::sync::atomic::AtomicUsize>,
     handle: Option<thread::JoinHandle<()>>,
 }
 
@@ -19,7 +20,9 @@ fn mime(path: &Path) -> &'static str {
         "wasm" => "application/wasm",
         "css" => "text/css; charset=utf-8",
         "svg" => "image/svg+xml",
-        "json" | "webmanifest" => "application/json",
+        "json" => "application/json",
+        "webmanifest" => "application/manifest+json",
+        "txt" => "text/plain; charset=utf-8",
         "png" => "image/png",
         _ => "application/octet-stream",
     }
@@ -31,15 +34,26 @@ impl StaticServer {
     /// # Errors
     /// When the port cannot be bound.
     pub fn start(root: &Path, prefix: &str) -> std::io::Result<Self> {
-        let server = tiny_http::Server::http("127.0.0.1:0").map_err(std::io::Error::other)?;
+        Self::start_on(root, prefix, 0)
+    }
+
+    /// As [`start`](Self::start) on a given port (0 for any free one).
+    ///
+    /// # Errors
+    /// When the port cannot be bound.
+    pub fn start_on(root: &Path, prefix: &str, port: u16) -> std::io::Result<Self> {
+        let server = tiny_http::Server::http(("127.0.0.1", port)).map_err(std::io::Error::other)?;
         let port = server.server_addr().to_ip().map(|a| a.port()).unwrap_or(0);
         let server = std::sync::Arc::new(server);
         let root = root.to_path_buf();
         let prefix = prefix.to_string();
         let s = server.clone();
         let p = prefix.clone();
+        let hits = std::sync::Arc::new(std::sync::atomic::AtomicUsize::new(0));
+        let counter = hits.clone();
         let handle = thread::spawn(move || {
             for req in s.incoming_requests() {
+                counter.fetch_add(1, std::sync::atomic::Ordering::SeqCst);
                 let url = req
                     .url()
                     .split(['?', '#'])
@@ -65,6 +79,7 @@ impl StaticServer {
         Ok(Self {
             url: format!("http://127.0.0.1:{port}{prefix}"),
             server,
+            hits,
             handle: Some(handle),
         })
     }
@@ -83,6 +98,14 @@ fn resolve(root: &Path, prefix: &str, url: &str) -> Option<PathBuf> {
         path = path.join("index.html");
     }
     path.is_file().then_some(path)
+}
+
+impl StaticServer {
+    /// How many requests the server has received.
+    #[must_use]
+    pub fn hits(&self) -> usize {
+        self.hits.load(std::sync::atomic::Ordering::SeqCst)
+    }
 }
 
 impl Drop for StaticServer {

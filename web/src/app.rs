@@ -1,17 +1,91 @@
 //! The whole page: the case signal, the evaluation memos, and the panels laid out.
 
+use crate::browser::{self, CURRENT_KEY};
 use crate::case::{CaseForm, Evaluation};
+use crate::history::{HistoryAction, HistoryPolicy};
+use crate::link::Case;
 use crate::panels::{
-    caution::CautionNote, element_turn::ElementTurn, mohr_diagram::MohrDiagram,
-    plane_probe::PlaneProbe, results::ResultsPanel, stale_notice::StaleNotice,
-    stress_element::StressElement, stress_entry::StressEntry,
+    case_shelf::CaseShelf, caution::CautionNote, element_turn::ElementTurn,
+    link_notice::LinkNotice, mohr_diagram::MohrDiagram, plane_probe::PlaneProbe,
+    results::ResultsPanel, stale_notice::StaleNotice, stress_element::StressElement,
+    stress_entry::StressEntry,
 };
 use leptos::prelude::*;
+
+/// The case to start with: the link in the URL; if there is none, or it is refused, the case last
+/// on screen in this browser; else the demo. Returns the case, a link problem and a storage
+/// problem to show.
+fn starting_case() -> (Case, Option<String>, Option<String>) {
+    let (stored, storage_problem) = match browser::load(CURRENT_KEY) {
+        Ok(v) => (v.and_then(|l| Case::from_link(&l).ok()), None),
+        Err(e) => (None, Some(e)),
+    };
+    let fallback = || stored.clone().unwrap_or_else(Case::demo);
+    let hash = browser::hash();
+    if hash.is_empty() {
+        return (fallback(), None, storage_problem);
+    }
+    match Case::from_link(&hash) {
+        Ok(c) => (c, None, storage_problem),
+        Err(e) => (fallback(), Some(e.to_string()), storage_problem),
+    }
+}
 
 /// The root component.
 #[component]
 pub fn App() -> impl IntoView {
-    let form = RwSignal::new(CaseForm::demo());
+    let (start, link_problem, storage_problem) = starting_case();
+    let link_problem = RwSignal::new(link_problem);
+    let storage_problem = RwSignal::new(storage_problem);
+    let start_link = start.to_link();
+    browser::set_hash(&start_link, false);
+    let policy = StoredValue::new(HistoryPolicy::new(start_link));
+    let form = RwSignal::new(start.to_form());
+
+    // Talk to the outside: every valid case goes to the URL (a new history entry when an edit
+    // starts after a pause) and to local storage.
+    Effect::new(move |_| {
+        let Ok(case) = form.with(Case::from_form) else {
+            return;
+        };
+        let link = case.to_link();
+        let mut action = HistoryAction::Nothing;
+        policy.update_value(|p| action = p.on_edit(browser::now_ms(), &link));
+        match action {
+            HistoryAction::Nothing => return,
+            HistoryAction::Push => browser::set_hash(&link, true),
+            HistoryAction::Replace => browser::set_hash(&link, false),
+        }
+        if let Err(e) = browser::store(CURRENT_KEY, &link) {
+            storage_problem.set(Some(e));
+        }
+    });
+
+    // Back, forward, or a link pasted into the address bar.
+    let navigated = move || {
+        let hash = browser::hash();
+        if policy.with_value(|p| p.current() == hash) {
+            return;
+        }
+        match Case::from_link(&hash) {
+            Ok(case) => {
+                let link = case.to_link();
+                if link != hash {
+                    browser::set_hash(&link, false);
+                }
+                policy.update_value(|p| p.on_navigate(&link));
+                link_problem.set(None);
+                form.set(case.to_form());
+            }
+            Err(e) => {
+                link_problem.set(Some(e.to_string()));
+                browser::set_hash(&policy.with_value(|p| p.current().to_string()), false);
+            }
+        }
+    };
+    // The page lives as long as the tab, so the listeners are never removed.
+    let _ = window_event_listener(leptos::ev::popstate, move |_| navigated());
+    let _ = window_event_listener(leptos::ev::hashchange, move |_| navigated());
     let result = Memo::new(move |_| form.with(CaseForm::evaluate));
     // The last good evaluation stays on screen while an input is invalid.
     let shown: Memo<Option<Evaluation>> =
@@ -29,11 +103,13 @@ pub fn App() -> impl IntoView {
             <p class="tagline">"Stress state at one critical point: principal stresses, all three Mohr's circles, the plane that matters."</p>
         </header>
         <CautionNote/>
+        <LinkNotice problem=link_problem/>
         <main class="bench">
             <div class="inputs">
                 <StressEntry form=form/>
                 <ElementTurn form=form shown=shown/>
                 <PlaneProbe form=form shown=shown/>
+                <CaseShelf form=form storage_problem=storage_problem/>
             </div>
             <div class="pictures" class:stale=move || stale.get()>
                 <StaleNotice result=result/>

@@ -2,6 +2,7 @@
 //! evaluation that core returns for it. No browser types here, so all of it is tested natively.
 
 use crate::entry::parse_number;
+use crate::link::{check_text, Case, MAX_NOTE, MAX_TITLE};
 use crate::numfmt::format_for_entry;
 use nalgebra::Vector3;
 use stresscase_core::equivalent::Equivalent;
@@ -44,6 +45,10 @@ pub enum Field {
     Ny,
     /// Plane normal, z component.
     Nz,
+    /// Case title (text).
+    Title,
+    /// Case note (text).
+    Note,
 }
 
 impl Field {
@@ -73,6 +78,8 @@ impl Field {
             Field::Nx => "nx",
             Field::Ny => "ny",
             Field::Nz => "nz",
+            Field::Title => "title",
+            Field::Note => "note",
         }
     }
 
@@ -90,6 +97,8 @@ impl Field {
             Field::Nx => "in-nx",
             Field::Ny => "in-ny",
             Field::Nz => "in-nz",
+            Field::Title => "in-title",
+            Field::Note => "in-note",
         }
     }
 
@@ -114,6 +123,8 @@ pub struct FieldProblem {
 pub struct CaseForm {
     /// One-line description of the part and point.
     pub title: String,
+    /// Free text about the case.
+    pub note: String,
     /// Plane or 3D.
     pub mode: Mode,
     /// Unit of every stress field.
@@ -148,6 +159,7 @@ impl CaseForm {
         Self {
             typed: stress.clone().map(|s| (s, StressUnit::MPa)),
             title: "Demo (invented): weld toe of the lifting-eye plate on a 3-tonne hoist crossbeam, top surface point".into(),
+            note: String::new(),
             mode: Mode::Plane,
             unit: StressUnit::MPa,
             stress,
@@ -166,6 +178,8 @@ impl CaseForm {
             Field::Nx => &self.normal[0],
             Field::Ny => &self.normal[1],
             Field::Nz => &self.normal[2],
+            Field::Title => &self.title,
+            Field::Note => &self.note,
             f => &self.stress[stress_index(f)],
         }
     }
@@ -177,6 +191,8 @@ impl CaseForm {
             Field::Nx => self.normal[0] = text,
             Field::Ny => self.normal[1] = text,
             Field::Nz => self.normal[2] = text,
+            Field::Title => self.title = text,
+            Field::Note => self.note = text,
             f => {
                 let i = stress_index(f);
                 self.typed[i] = (text.clone(), self.unit);
@@ -233,10 +249,12 @@ impl CaseForm {
     /// The problem with one field, if any.
     #[must_use]
     pub fn problem(&self, field: Field) -> Option<String> {
-        if !self.is_active(field) {
-            return None;
+        match field {
+            _ if !self.is_active(field) => None,
+            Field::Title => check_text(&self.title, MAX_TITLE).err().map(str::to_string),
+            Field::Note => check_text(&self.note, MAX_NOTE).err().map(str::to_string),
+            _ => parse_number(self.text(field)).err().map(|e| e.to_string()),
         }
-        parse_number(self.text(field)).err().map(|e| e.to_string())
     }
 
     /// Validates every active field and, when all read, evaluates the case with core.
@@ -244,28 +262,20 @@ impl CaseForm {
     /// # Errors
     /// Every field that is wrong, with its reason (in field order).
     pub fn evaluate(&self) -> Result<Evaluation, Vec<FieldProblem>> {
-        let mut problems = Vec::new();
-        let mut read = |field: Field| -> f64 {
-            if !self.is_active(field) {
-                return 0.0;
-            }
-            match parse_number(self.text(field)) {
-                Ok(v) => v,
-                Err(e) => {
-                    problems.push(FieldProblem {
-                        field,
-                        message: e.to_string(),
-                    });
-                    0.0
-                }
-            }
-        };
-        let c = Field::STRESS.map(&mut read);
-        let angle = read(Field::Angle);
-        let n = Field::NORMAL.map(&mut read);
-        if !problems.is_empty() {
-            return Err(problems);
-        }
+        Case::from_form(self)?.evaluate()
+    }
+}
+
+impl Case {
+    /// Evaluates the case with core.
+    ///
+    /// # Errors
+    /// A core refusal (overflow of an extreme entry, zero normal), attached to the field it
+    /// comes from.
+    pub fn evaluate(&self) -> Result<Evaluation, Vec<FieldProblem>> {
+        let c = self.stress;
+        let n = self.normal;
+        let angle = self.angle;
         let fail = |field: Field, e: stresscase_core::StressError| {
             vec![FieldProblem {
                 field,

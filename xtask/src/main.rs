@@ -1,10 +1,12 @@
 //! `cargo xtask <command>`: every dev chore of Stresscase in one place.
 //!
-//! - `serve`: install what is missing, build the page and serve it on http://127.0.0.1:8080
+//! - `serve`: install what is missing, build and pack the page, serve `dist/` on
+//!   http://127.0.0.1:8080
 //! - `test`: install what is missing, then every check and test (formatting, lints, the no_std
 //!   wasm32 build of core, unit/property/reference tests, the release build of the page, and the
 //!   headless-Chromium tests against it)
-//! - `build`: install what is missing and build the page into `dist/`
+//! - `build`: install what is missing, build the page and pack it into `dist/` (opens from disk
+//!   too) and `target/stresscase-offline.zip`
 //! - `bench`: the principal-value benchmark against numpy (installs numpy if missing)
 //! - `refdata`: regenerate the 50-digit mpmath reference data (installs mpmath if missing)
 //! - `setup`: only install what is missing
@@ -12,6 +14,8 @@
 //! Tools are pinned: trunk 0.21.14, wasm-bindgen-cli equal to the `wasm-bindgen` in Cargo.lock,
 //! wasm-opt (binaryen) 132. Each is checked by its `--version` and installed only when absent or
 //! different, so a second run is quick. Trunk runs with `--offline` and never downloads a tool.
+
+mod pack;
 
 use std::path::{Path, PathBuf};
 use std::process::{Command, ExitCode};
@@ -208,23 +212,34 @@ fn chromium() -> PathBuf {
     std::env::var_os("CHROMIUM").map_or_else(|| PathBuf::from("/usr/bin/chromium"), PathBuf::from)
 }
 
+/// Builds the page with trunk and packs it into `dist/` and `target/stresscase-offline.zip`.
 fn build_page() -> Result {
-    run("trunk", &["build", "--release", "--offline"])
+    run("trunk", &["build", "--release", "--offline"])?;
+    let r = root();
+    pack::pack(
+        &r.join("target/trunk-dist"),
+        &r.join("static/favicon.svg"),
+        &r.join("dist"),
+        &r.join("target/stresscase-offline.zip"),
+    )
 }
 
+/// Builds and packs the page, then serves exactly the folder users get.
 fn serve() -> Result {
-    eprintln!("xtask: serving on http://127.0.0.1:8080/ (Ctrl-C to stop)");
+    build_page()?;
+    let dist = root().join("dist");
     run(
-        "trunk",
+        &cargo(),
         &[
-            "serve",
-            "--release",
-            "--offline",
-            "--address",
-            "127.0.0.1",
-            "--port",
+            "run",
+            "--quiet",
+            "-p",
+            "stresscase-tests",
+            "--bin",
+            "serve-folder",
+            "--",
+            &dist.to_string_lossy(),
             "8080",
-            "--disable-address-lookup",
         ],
     )
 }
@@ -265,6 +280,8 @@ fn test() -> Result {
             "stresscase-tests",
             "--test",
             "page_in_browser",
+            "--test",
+            "page_offline_and_links",
             "--",
             "--ignored",
             "--test-threads=2",

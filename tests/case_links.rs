@@ -1,0 +1,140 @@
+//! Case links stay stable: every fixture link of format v1 (`tests/data/case_links_v1.json`,
+//! hand-written) opens exactly its recorded case in this and every later release; every link
+//! in the bad-link corpus (`tests/data/bad_links_v1.txt` plus generated ones) is refused with a
+//! message naming the problem. Saved-case files written by this release read back.
+
+use serde_json::Value;
+use stresscase_core::{AngleUnit, ShearAxis, StressUnit};
+use stresscase_tests::check::data_path;
+use stresscase_web::case::Mode;
+use stresscase_web::link::{Case, LinkError};
+use stresscase_web::saved::Library;
+
+fn expected(v: &Value) -> Case {
+    let nums = |k: &str| -> Vec<f64> {
+        v[k].as_array()
+            .expect(k)
+            .iter()
+            .map(|x| x.as_f64().expect("number"))
+            .collect()
+    };
+    let s = nums("stress");
+    let n = nums("normal");
+    Case {
+        title: v["title"].as_str().expect("title").into(),
+        note: v["note"].as_str().expect("note").into(),
+        mode: if v["mode"] == "3d" {
+            Mode::Full
+        } else {
+            Mode::Plane
+        },
+        unit: StressUnit::from_symbol(v["unit"].as_str().expect("unit")).expect("known unit"),
+        stress: [s[0], s[1], s[2], s[3], s[4], s[5]],
+        angle: v["angle"].as_f64().expect("angle"),
+        angle_unit: if v["angle_unit"] == "rad" {
+            AngleUnit::Radian
+        } else {
+            AngleUnit::Degree
+        },
+        normal: [n[0], n[1], n[2]],
+        shear_axis: if v["shear"] == "up" {
+            ShearAxis::PositiveUp
+        } else {
+            ShearAxis::PositiveDown
+        },
+    }
+}
+
+#[test]
+fn v1_fixture_links_open_their_recorded_cases() {
+    let text = std::fs::read_to_string(data_path("data/case_links_v1.json")).expect("fixture file");
+    let file: Value = serde_json::from_str(&text).expect("fixture JSON");
+    let links = file["links"].as_array().expect("links");
+    assert!(links.len() >= 7);
+    for entry in links {
+        let link = entry["link"].as_str().expect("link");
+        let want = expected(&entry["case"]);
+        assert_eq!(Case::from_link(link).as_ref(), Ok(&want), "{link}");
+        // What this release writes for the case reads back to it too.
+        assert_eq!(Case::from_link(&want.to_link()), Ok(want));
+    }
+}
+
+fn corpus() -> Vec<(String, String)> {
+    let text = std::fs::read_to_string(data_path("data/bad_links_v1.txt")).expect("corpus file");
+    let mut out: Vec<(String, String)> = text
+        .lines()
+        .filter(|l| !l.starts_with("# ") && !l.is_empty())
+        .map(|l| {
+            let (says, link) = l.split_once('\t').expect("tab-separated line");
+            (says.to_string(), link.to_string())
+        })
+        .collect();
+    // Generated: 100 KB of junk, an over-long valid-looking link, a huge number.
+    out.push((
+        "characters long".into(),
+        format!("#{}", "x".repeat(100_000)),
+    ));
+    out.push((
+        "characters long".into(),
+        format!(
+            "#v=1&mode=plane&unit=MPa&sx=1&sy=2&txy=3&note={}",
+            "a".repeat(9000)
+        ),
+    ));
+    out.push((
+        "longer than 200 characters".into(),
+        format!(
+            "#v=1&title={}&mode=plane&unit=MPa&sx=1&sy=2&txy=3",
+            "t".repeat(201)
+        ),
+    ));
+    out.push((
+        "longer than 2000 characters".into(),
+        format!(
+            "#v=1&note={}&mode=plane&unit=MPa&sx=1&sy=2&txy=3",
+            "n".repeat(2001)
+        ),
+    ));
+    out.push((
+        "is not a finite number".into(),
+        format!(
+            "#v=1&mode=plane&unit=MPa&sx=1{}&sy=2&txy=3",
+            "0".repeat(400)
+        ),
+    ));
+    out
+}
+
+#[test]
+fn bad_links_are_refused_with_a_reason() {
+    let corpus = corpus();
+    assert!(corpus.len() >= 50, "only {} bad links", corpus.len());
+    for (says, link) in corpus {
+        match Case::from_link(&link) {
+            Ok(c) => panic!("accepted a bad link {link:.80}: {c:?}"),
+            Err(e) => {
+                let msg = e.to_string();
+                assert!(
+                    msg.contains(&says),
+                    "{link:.80}: message {msg:?} lacks {says:?}"
+                );
+                assert!(msg.len() < 200, "message too long to show: {msg}");
+            }
+        }
+    }
+    assert_eq!(Case::from_link("#"), Err(LinkError::Empty));
+}
+
+#[test]
+fn saved_cases_files_read_back() {
+    let mut lib = Library::default();
+    let text = std::fs::read_to_string(data_path("data/case_links_v1.json")).expect("fixture file");
+    let file: Value = serde_json::from_str(&text).expect("fixture JSON");
+    for (i, entry) in file["links"].as_array().expect("links").iter().enumerate() {
+        lib.save(&format!("fixture {i}"), &expected(&entry["case"]))
+            .expect("save");
+    }
+    let json = lib.to_json();
+    assert_eq!(Library::from_json(&json), Ok(lib));
+}

@@ -1,0 +1,603 @@
+//! Case links: the whole case in the URL fragment (after `#`, so it never reaches a server).
+//!
+//! Format, version 1 (documented in `docs/case-link-v1.md`; fixtures in
+//! `tests/data/case_links_v1.txt` must decode the same in every later release):
+//!
+//! ```text
+//! v=1&title=Lug%20weld&mode=plane&unit=MPa&sx=84&sy=-22&txy=37&theta=30&au=deg&n=1,1,1&shear=down
+//! ```
+//!
+//! `key=value` pairs joined by `&`, `v=1` first. Values are percent-encoded UTF-8. Numbers are
+//! written in their shortest form that reads back to the same f64. Keys:
+//!
+//! | key | value | required |
+//! |---|---|---|
+//! | `v` | `1` | yes, first |
+//! | `title`, `note` | text, ≤ 200 / ≤ 2000 characters | no |
+//! | `mode` | `plane` or `3d` | yes |
+//! | `unit` | `Pa` `kPa` `MPa` `GPa` `psi` `ksi` | yes |
+//! | `sx` `sy` `txy` | numbers | yes |
+//! | `sz` `tyz` `tzx` | numbers | in `3d` mode only, and then required |
+//! | `theta` | number, in `au` | no (0) |
+//! | `au` | `deg` or `rad` | no (`deg`) |
+//! | `n` | three numbers, not all zero | no (`1,1,1`) |
+//! | `shear` | `down` or `up` | no (`down`) |
+//!
+//! Decoding is strict: an unknown or repeated key, a missing one, a non-number, a non-finite
+//! number, a text with `<script` or `javascript:`, or a link over 8192 characters is refused with
+//! a [`LinkError`] naming the problem. Nothing in a link is ever run or inserted as markup.
+
+use crate::case::{CaseForm, Field, FieldProblem, Mode};
+use crate::entry::parse_number;
+use core::fmt;
+use percent_encoding::{percent_decode_str, utf8_percent_encode, AsciiSet, NON_ALPHANUMERIC};
+use stresscase_core::{AngleUnit, ShearAxis, StressUnit};
+
+/// The link version this release writes.
+pub const LINK_VERSION: &str = "1";
+/// Longest link accepted, in bytes after `#`.
+pub const MAX_LINK_LEN: usize = 8192;
+/// Longest title, in characters.
+pub const MAX_TITLE: usize = 200;
+/// Longest note, in characters.
+pub const MAX_NOTE: usize = 2000;
+
+/// Characters left as they are in values: letters, digits and `-._~,` (so numbers and lists
+/// stay readable).
+const VALUE: &AsciiSet = &NON_ALPHANUMERIC
+    .remove(b'-')
+    .remove(b'.')
+    .remove(b'_')
+    .remove(b'~')
+    .remove(b',');
+
+/// A case as values: what a link or a saved case holds.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Case {
+    /// Short description of the part and point.
+    pub title: String,
+    /// Longer free text.
+    pub note: String,
+    /// Plane or 3D.
+    pub mode: Mode,
+    /// Stress unit.
+    pub unit: StressUnit,
+    /// σx, σy, σz, τxy, τyz, τzx in `unit` (out-of-plane ones zero in plane mode).
+    pub stress: [f64; 6],
+    /// Element turn in `angle_unit`.
+    pub angle: f64,
+    /// Angle unit.
+    pub angle_unit: AngleUnit,
+    /// Plane normal (any non-zero length).
+    pub normal: [f64; 3],
+    /// Shear plotting convention.
+    pub shear_axis: ShearAxis,
+}
+
+/// Why a link was refused.
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub enum LinkError {
+    /// Nothing after `#`.
+    Empty,
+    /// Over [`MAX_LINK_LEN`].
+    TooLong(usize),
+    /// Does not start with `v=`.
+    NotACaseLink,
+    /// A version this release does not know.
+    Version(String),
+    /// A part without `=`.
+    Malformed(String),
+    /// A key v1 does not have.
+    UnknownKey(String),
+    /// A key given twice.
+    Repeated(&'static str),
+    /// A required key is absent.
+    Missing(&'static str),
+    /// A key that the mode does not use (e.g. `sz` in plane mode).
+    NotInMode(&'static str),
+    /// Not a number.
+    NotANumber(&'static str, String),
+    /// NaN, infinite, or beyond ±1.8e308.
+    NotFinite(&'static str, String),
+    /// Not one of the allowed words.
+    BadChoice(&'static str, String, &'static str),
+    /// Wrong count of numbers in a list.
+    Count(&'static str, usize, usize),
+    /// The plane normal is (0, 0, 0).
+    ZeroNormal,
+    /// A text value that is refused, with the reason.
+    BadText(&'static str, &'static str),
+}
+
+fn shorten(s: &str) -> String {
+    let mut out: String = s.chars().take(40).collect();
+    if s.chars().count() > 40 {
+        out.push('…');
+    }
+    out
+}
+
+impl fmt::Display for LinkError {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        match self {
+            Self::Empty => write!(f, "the link holds no case (nothing after #)"),
+            Self::TooLong(n) => write!(
+                f,
+                "the link is {n} characters long; a case link has at most {MAX_LINK_LEN}"
+            ),
+            Self::NotACaseLink => write!(
+                f,
+                "this is not a Stresscase case link: it must start with v=1"
+            ),
+            Self::Version(v) => {
+                write!(f, "link version '{}' is not known to this release (it reads version {LINK_VERSION})", shorten(v))
+            }
+            Self::Malformed(p) => write!(
+                f,
+                "'{}' is not key=value; the link may be truncated",
+                shorten(p)
+            ),
+            Self::UnknownKey(k) => write!(f, "unknown key '{}'", shorten(k)),
+            Self::Repeated(k) => write!(f, "key '{k}' appears more than once"),
+            Self::Missing(k) => write!(f, "key '{k}' is missing; the link may be truncated"),
+            Self::NotInMode(k) => write!(f, "key '{k}' is only used in 3d mode"),
+            Self::NotANumber(k, v) => write!(f, "{k}: '{}' is not a number", shorten(v)),
+            Self::NotFinite(k, v) => write!(f, "{k}: '{}' is not a finite number", shorten(v)),
+            Self::BadChoice(k, v, allowed) => {
+                write!(f, "{k}: '{}' is not one of {allowed}", shorten(v))
+            }
+            Self::Count(k, want, got) => write!(
+                f,
+                "{k}: needs {want} numbers separated by commas, found {got}"
+            ),
+            Self::ZeroNormal => write!(f, "n: the plane normal has zero length"),
+            Self::BadText(k, why) => write!(f, "{k}: {why}"),
+        }
+    }
+}
+
+/// Checks a title or note: length, no control characters, no script-like content.
+///
+/// # Errors
+/// The reason, naming nothing (the caller names the field).
+pub fn check_text(text: &str, max: usize) -> Result<(), &'static str> {
+    if text.chars().count() > max {
+        return Err(if max == MAX_TITLE {
+            "longer than 200 characters"
+        } else {
+            "longer than 2000 characters"
+        });
+    }
+    if text
+        .chars()
+        .any(|c| c.is_control() && c != '\n' && c != '\t')
+    {
+        return Err("contains control characters");
+    }
+    let lower = text.to_lowercase();
+    if lower.contains("<script") || lower.contains("javascript:") {
+        return Err("contains <script or javascript:, which a case never needs");
+    }
+    Ok(())
+}
+
+/// Writes a number in its shortest form that reads back to the same f64.
+#[must_use]
+pub fn write_number(v: f64) -> String {
+    if v == 0.0 {
+        return "0".into();
+    }
+    let plain = format!("{v}");
+    let sci = format!("{v:e}");
+    if sci.len() < plain.len() {
+        sci
+    } else {
+        plain
+    }
+}
+
+fn read_number(key: &'static str, raw: &str) -> Result<f64, LinkError> {
+    if raw.is_empty()
+        || !raw
+            .bytes()
+            .all(|b| b.is_ascii_digit() || b"+-.eE".contains(&b))
+    {
+        return Err(LinkError::NotANumber(key, raw.into()));
+    }
+    match raw.parse::<f64>() {
+        Ok(v) if v.is_finite() => Ok(v),
+        Ok(_) => Err(LinkError::NotFinite(key, raw.into())),
+        Err(_) => Err(LinkError::NotANumber(key, raw.into())),
+    }
+}
+
+const KEYS: [&str; 15] = [
+    "v", "title", "note", "mode", "unit", "sx", "sy", "sz", "txy", "tyz", "tzx", "theta", "au",
+    "n", "shear",
+];
+
+impl Case {
+    /// The built-in demo case.
+    #[must_use]
+    pub fn demo() -> Self {
+        Self::from_form(&CaseForm::demo())
+            .unwrap_or_else(|_| unreachable!("the demo form is valid"))
+    }
+
+    /// Reads a form; every active field must be valid.
+    ///
+    /// # Errors
+    /// Each invalid field with its reason.
+    pub fn from_form(form: &CaseForm) -> Result<Self, Vec<FieldProblem>> {
+        let mut problems = Vec::new();
+        let mut read = |field: Field| -> f64 {
+            if !form.is_active(field) {
+                return 0.0;
+            }
+            parse_number(form.text(field)).unwrap_or_else(|e| {
+                problems.push(FieldProblem {
+                    field,
+                    message: e.to_string(),
+                });
+                0.0
+            })
+        };
+        let stress = Field::STRESS.map(&mut read);
+        let angle = read(Field::Angle);
+        let normal = Field::NORMAL.map(&mut read);
+        if normal == [0.0; 3] && !problems.iter().any(|p| Field::NORMAL.contains(&p.field)) {
+            problems.push(FieldProblem {
+                field: Field::Nx,
+                message: LinkError::ZeroNormal.to_string(),
+            });
+        }
+        for (field, text, max) in [
+            (Field::Title, &form.title, MAX_TITLE),
+            (Field::Note, &form.note, MAX_NOTE),
+        ] {
+            if let Err(why) = check_text(text, max) {
+                problems.push(FieldProblem {
+                    field,
+                    message: why.into(),
+                });
+            }
+        }
+        if !problems.is_empty() {
+            return Err(problems);
+        }
+        Ok(Self {
+            title: form.title.clone(),
+            note: form.note.clone(),
+            mode: form.mode,
+            unit: form.unit,
+            stress,
+            angle,
+            angle_unit: form.angle_unit,
+            normal,
+            shear_axis: form.shear_axis,
+        })
+    }
+
+    /// The form showing this case (numbers written in their shortest exact form).
+    #[must_use]
+    pub fn to_form(&self) -> CaseForm {
+        let mut f = CaseForm::demo();
+        f.title.clone_from(&self.title);
+        f.note.clone_from(&self.note);
+        f.mode = self.mode;
+        f.unit = self.unit;
+        for (field, v) in Field::STRESS.into_iter().zip(self.stress) {
+            f.set_text(field, write_number(v));
+        }
+        f.angle = write_number(self.angle);
+        f.angle_unit = self.angle_unit;
+        f.normal = self.normal.map(write_number);
+        f.shear_axis = self.shear_axis;
+        f
+    }
+
+    /// The link text (without `#`).
+    #[must_use]
+    pub fn to_link(&self) -> String {
+        let enc = |s: &str| utf8_percent_encode(s, VALUE).to_string();
+        let mut parts = vec![format!("v={LINK_VERSION}")];
+        if !self.title.is_empty() {
+            parts.push(format!("title={}", enc(&self.title)));
+        }
+        if !self.note.is_empty() {
+            parts.push(format!("note={}", enc(&self.note)));
+        }
+        parts.push(format!(
+            "mode={}",
+            if self.mode == Mode::Plane {
+                "plane"
+            } else {
+                "3d"
+            }
+        ));
+        parts.push(format!("unit={}", self.unit.symbol()));
+        let [sx, sy, sz, txy, tyz, tzx] = self.stress.map(write_number);
+        parts.push(format!("sx={sx}"));
+        parts.push(format!("sy={sy}"));
+        if self.mode == Mode::Full {
+            parts.push(format!("sz={sz}"));
+        }
+        parts.push(format!("txy={txy}"));
+        if self.mode == Mode::Full {
+            parts.push(format!("tyz={tyz}"));
+            parts.push(format!("tzx={tzx}"));
+        }
+        parts.push(format!("theta={}", write_number(self.angle)));
+        parts.push(format!(
+            "au={}",
+            if self.angle_unit == AngleUnit::Degree {
+                "deg"
+            } else {
+                "rad"
+            }
+        ));
+        parts.push(format!("n={}", self.normal.map(write_number).join(",")));
+        parts.push(format!(
+            "shear={}",
+            if self.shear_axis == ShearAxis::PositiveDown {
+                "down"
+            } else {
+                "up"
+            }
+        ));
+        parts.join("&")
+    }
+
+    /// Reads a link (with or without the leading `#`).
+    ///
+    /// # Errors
+    /// The first problem found, naming the key.
+    pub fn from_link(raw: &str) -> Result<Self, LinkError> {
+        let s = raw.strip_prefix('#').unwrap_or(raw);
+        if s.len() > MAX_LINK_LEN {
+            return Err(LinkError::TooLong(s.chars().count()));
+        }
+        if s.trim().is_empty() {
+            return Err(LinkError::Empty);
+        }
+        let mut values: [Option<String>; KEYS.len()] = Default::default();
+        for (i, part) in s.split('&').enumerate() {
+            let Some((k, v)) = part.split_once('=') else {
+                return Err(if i == 0 {
+                    LinkError::NotACaseLink
+                } else {
+                    LinkError::Malformed(part.into())
+                });
+            };
+            // Browsers may percent-encode any character of the fragment, keys included.
+            let k = percent_decode_str(k).decode_utf8_lossy();
+            let k = k.as_ref();
+            if i == 0 && k != "v" {
+                return Err(LinkError::NotACaseLink);
+            }
+            let Some(slot) = KEYS.iter().position(|&known| known == k) else {
+                return Err(LinkError::UnknownKey(k.into()));
+            };
+            if values[slot].is_some() {
+                return Err(LinkError::Repeated(KEYS[slot]));
+            }
+            let text = percent_decode_str(v)
+                .decode_utf8()
+                .map_err(|_| LinkError::BadText(KEYS[slot], "is not valid UTF-8 text"))?;
+            values[slot] = Some(text.into_owned());
+        }
+        let take = |key: &'static str| -> Option<&str> {
+            KEYS.iter()
+                .position(|&k| k == key)
+                .and_then(|i| values[i].as_deref())
+        };
+        let required = |key: &'static str| take(key).ok_or(LinkError::Missing(key));
+        let version = required("v")?;
+        if version != LINK_VERSION {
+            return Err(LinkError::Version(version.into()));
+        }
+        let mode = match required("mode")? {
+            "plane" => Mode::Plane,
+            "3d" => Mode::Full,
+            other => return Err(LinkError::BadChoice("mode", other.into(), "plane, 3d")),
+        };
+        let unit_text = required("unit")?;
+        let unit = StressUnit::from_symbol(unit_text).ok_or_else(|| {
+            LinkError::BadChoice("unit", unit_text.into(), "Pa, kPa, MPa, GPa, psi, ksi")
+        })?;
+        let mut stress = [0.0; 6];
+        for (i, key) in ["sx", "sy", "sz", "txy", "tyz", "tzx"]
+            .into_iter()
+            .enumerate()
+        {
+            let out_of_plane = matches!(key, "sz" | "tyz" | "tzx");
+            match (take(key), mode, out_of_plane) {
+                (Some(_), Mode::Plane, true) => return Err(LinkError::NotInMode(key)),
+                (None, Mode::Plane, true) => {}
+                (v, _, _) => stress[i] = read_number(key, v.ok_or(LinkError::Missing(key))?)?,
+            }
+        }
+        let angle = take("theta").map_or(Ok(0.0), |v| read_number("theta", v))?;
+        let angle_unit = match take("au").unwrap_or("deg") {
+            "deg" => AngleUnit::Degree,
+            "rad" => AngleUnit::Radian,
+            other => return Err(LinkError::BadChoice("au", other.into(), "deg, rad")),
+        };
+        let normal = match take("n") {
+            None => [1.0; 3],
+            Some(v) => {
+                let parts: Vec<&str> = v.split(',').collect();
+                if parts.len() != 3 {
+                    return Err(LinkError::Count("n", 3, parts.len()));
+                }
+                let n = [
+                    read_number("n", parts[0])?,
+                    read_number("n", parts[1])?,
+                    read_number("n", parts[2])?,
+                ];
+                if n == [0.0; 3] {
+                    return Err(LinkError::ZeroNormal);
+                }
+                n
+            }
+        };
+        let shear_axis = match take("shear").unwrap_or("down") {
+            "down" => ShearAxis::PositiveDown,
+            "up" => ShearAxis::PositiveUp,
+            other => return Err(LinkError::BadChoice("shear", other.into(), "down, up")),
+        };
+        let title = take("title").unwrap_or("").to_string();
+        check_text(&title, MAX_TITLE).map_err(|why| LinkError::BadText("title", why))?;
+        let note = take("note").unwrap_or("").to_string();
+        check_text(&note, MAX_NOTE).map_err(|why| LinkError::BadText("note", why))?;
+        Ok(Self {
+            title,
+            note,
+            mode,
+            unit,
+            stress,
+            angle,
+            angle_unit,
+            normal,
+            shear_axis,
+        })
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use proptest::prelude::*;
+
+    #[test]
+    fn demo_link_reads_back() {
+        let c = Case::demo();
+        let link = c.to_link();
+        assert!(
+            link.starts_with("v=1&title=Demo%20%28invented%29"),
+            "{link}"
+        );
+        assert!(
+            link.contains(
+                "&mode=plane&unit=MPa&sx=84&sy=-22&txy=37&theta=30&au=deg&n=1,1,1&shear=down"
+            ),
+            "{link}"
+        );
+        assert_eq!(Case::from_link(&format!("#{link}")), Ok(c));
+    }
+
+    #[test]
+    fn percent_encoded_keys_read_like_plain_ones() {
+        let plain = "v=1&mode=plane&unit=MPa&sx=1&sy=2&txy=3";
+        let encoded = "%76=1&mode=plane&unit=MPa&%73x=1&sy=2&txy=3";
+        assert_eq!(Case::from_link(encoded), Case::from_link(plain));
+        let e =
+            Case::from_link("v=1&mode=plane&unit=MPa&sx=1&sy=2&txy=3&%3Cimg%20src=1").unwrap_err();
+        assert_eq!(e.to_string(), "unknown key '<img src'");
+    }
+
+    #[test]
+    fn numbers_are_short_and_exact() {
+        for v in [
+            84.0,
+            -35.5,
+            1e150,
+            -1e-150,
+            0.1 + 0.2,
+            6894.757293168361,
+            5e-324,
+            f64::MAX,
+        ] {
+            let s = write_number(v);
+            assert_eq!(s.parse::<f64>().unwrap(), v, "{s}");
+            assert!(s.len() <= 24, "{s}");
+        }
+        assert_eq!(write_number(-0.0), "0");
+        assert_eq!(write_number(1e150), "1e150");
+    }
+
+    fn arb_text(max: usize) -> impl Strategy<Value = String> {
+        proptest::string::string_regex(&format!(
+            "[ -~\u{00e9}\u{03c3}\u{2264}\n]{{0,{}}}",
+            max.min(60)
+        ))
+        .unwrap()
+        .prop_filter("script-free", move |s| check_text(s, max).is_ok())
+    }
+
+    fn arb_num() -> impl Strategy<Value = f64> {
+        prop_oneof![
+            (-1e4..1e4f64),
+            any::<f64>().prop_filter("finite", |v| v.is_finite()),
+            Just(0.0),
+        ]
+    }
+
+    fn arb_case() -> impl Strategy<Value = Case> {
+        (
+            (
+                arb_text(MAX_TITLE),
+                arb_text(MAX_NOTE),
+                any::<bool>(),
+                0usize..6,
+            ),
+            prop::array::uniform6(arb_num()),
+            (
+                arb_num(),
+                any::<bool>(),
+                prop::array::uniform3(arb_num()),
+                any::<bool>(),
+            ),
+        )
+            .prop_filter_map(
+                "non-zero normal",
+                |((title, note, full, u), mut stress, (angle, rad, normal, up))| {
+                    if normal == [0.0; 3] {
+                        return None;
+                    }
+                    let mode = if full { Mode::Full } else { Mode::Plane };
+                    if mode == Mode::Plane {
+                        stress[2] = 0.0;
+                        stress[4] = 0.0;
+                        stress[5] = 0.0;
+                    }
+                    Some(Case {
+                        title,
+                        note,
+                        mode,
+                        unit: StressUnit::ALL[u],
+                        stress,
+                        angle,
+                        angle_unit: if rad {
+                            AngleUnit::Radian
+                        } else {
+                            AngleUnit::Degree
+                        },
+                        normal,
+                        shear_axis: if up {
+                            ShearAxis::PositiveUp
+                        } else {
+                            ShearAxis::PositiveDown
+                        },
+                    })
+                },
+            )
+    }
+
+    proptest! {
+        #[test]
+        fn any_case_round_trips_through_its_link(c in arb_case()) {
+            let link = c.to_link();
+            prop_assert!(link.len() <= MAX_LINK_LEN);
+            prop_assert_eq!(Case::from_link(&link), Ok(c.clone()));
+            // And through the form the page shows.
+            prop_assert_eq!(Case::from_form(&c.to_form()), Ok(c));
+        }
+
+        #[test]
+        fn any_text_is_refused_or_read_never_panics(s in ".{0,300}") {
+            let _ = Case::from_link(&s);
+            let _ = Case::from_link(&format!("v=1&{s}"));
+        }
+    }
+}
