@@ -79,7 +79,7 @@ fn corpus() -> Vec<(String, String)> {
         "characters long".into(),
         format!(
             "#v=1&mode=plane&unit=MPa&sx=1&sy=2&txy=3&note={}",
-            "a".repeat(9000)
+            "a".repeat(40_000)
         ),
     ));
     out.push((

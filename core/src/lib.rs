@@ -24,15 +24,18 @@ extern crate std;
 pub mod equivalent;
 pub mod error;
 pub mod fmath;
+pub mod hooke;
 pub mod invariants;
 pub mod mohr;
 pub mod principal;
+pub mod rosette;
 pub mod tensor;
 pub mod transform;
 pub mod units;
 
 pub use equivalent::Equivalent;
 pub use error::StressError;
+pub use hooke::{Elastic, ElasticError, Strain};
 pub use invariants::Invariants;
 pub use mohr::{FacePoint, Mohr3d, MohrCircle, PlaneMohr, ShearAxis};
 

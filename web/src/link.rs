@@ -24,7 +24,7 @@
 //! | `shear` | `down` or `up` | no (`down`) |
 //!
 //! Decoding is strict: an unknown or repeated key, a missing one, a non-number, a non-finite
-//! number, a text with `<script` or `javascript:`, or a link over 8192 characters is refused with
+//! number, a text with `<script` or `javascript:`, or a link over 32 KiB is refused with
 //! a [`LinkError`] naming the problem. Nothing in a link is ever run or inserted as markup.
 
 use crate::case::{CaseForm, Field, FieldProblem, Mode};
@@ -35,8 +35,10 @@ use stresscase_core::{AngleUnit, ShearAxis, StressUnit};
 
 /// The link version this release writes.
 pub const LINK_VERSION: &str = "1";
-/// Longest link accepted, in bytes after `#`.
-pub const MAX_LINK_LEN: usize = 8192;
+/// Longest link accepted, in bytes after `#`. It must hold the longest valid case: a title and
+/// note at their limits in 4-byte characters percent-encode to 12 bytes each, plus the numbers.
+pub const MAX_LINK_LEN: usize = 32 * 1024;
+const _: () = assert!((MAX_TITLE + MAX_NOTE) * 12 + 4096 <= MAX_LINK_LEN);
 /// Longest title, in characters.
 pub const MAX_TITLE: usize = 200;
 /// Longest note, in characters.
@@ -484,6 +486,21 @@ mod tests {
             "{link}"
         );
         assert_eq!(Case::from_link(&format!("#{link}")), Ok(c));
+    }
+
+    #[test]
+    fn the_longest_valid_case_fits_in_a_link() {
+        // Found by fuzzing: a note at its limit in non-Latin script once outgrew the link limit.
+        let mut c = Case::demo();
+        c.mode = Mode::Full;
+        c.title = "\u{1F529}".repeat(MAX_TITLE);
+        c.note = "\u{1F529}".repeat(MAX_NOTE);
+        c.stress = [-1.2345678901234567e-300; 6];
+        c.normal = [-2.2250738585072014e-308; 3];
+        c.angle = -1.2345678901234567e-300;
+        let link = c.to_link();
+        assert!(link.len() <= MAX_LINK_LEN, "{}", link.len());
+        assert_eq!(Case::from_link(&link), Ok(c));
     }
 
     #[test]

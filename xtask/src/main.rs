@@ -9,6 +9,8 @@
 //!   too) and `target/stresscase-offline.zip`
 //! - `bench`: the principal-value benchmark against numpy (installs numpy if missing)
 //! - `refdata`: regenerate the 50-digit mpmath reference data (installs mpmath if missing)
+//! - `fuzz [RUNS]`: libFuzzer on the case-link decoder and the saved-cases importer, RUNS
+//!   executions each (default 10 million; installs cargo-fuzz if missing)
 //! - `setup`: only install what is missing
 //!
 //! Tools are pinned: trunk 0.21.14, wasm-bindgen-cli equal to the `wasm-bindgen` in Cargo.lock,
@@ -38,8 +40,9 @@ fn main() -> ExitCode {
         "test" => test(),
         "bench" => bench(),
         "refdata" => refdata(),
+        "fuzz" => fuzz(args.get(1).map_or("10000000", String::as_str)),
         _ => {
-            eprintln!("usage: cargo xtask <serve|test|build|bench|refdata|setup>");
+            eprintln!("usage: cargo xtask <serve|test|build|bench|refdata|fuzz [RUNS]|setup>");
             return ExitCode::from(2);
         }
     };
@@ -326,4 +329,40 @@ fn refdata() -> Result {
     }
     std::fs::write(root().join("tests/data/principal_mp50.csv"), out.stdout)
         .map_err(|e| e.to_string())
+}
+
+/// Runs each fuzz target for `runs` executions, starting from the seeds in `web/fuzz/seeds/`.
+/// cargo-fuzz needs unstable compiler flags; `RUSTC_BOOTSTRAP=1` allows them on stable Rust for
+/// this command only.
+fn fuzz(runs: &str) -> Result {
+    if runs.parse::<u64>().is_err() {
+        return Err(format!("RUNS must be a whole number, not {runs:?}"));
+    }
+    if output_of(&cargo(), &["fuzz", "--version"]).is_none() {
+        run(&cargo(), &["install", "cargo-fuzz", "--locked"])?;
+    }
+    let r = root();
+    for target in ["link_decoder", "saved_import"] {
+        let corpus = r.join("web/fuzz/corpus").join(target);
+        std::fs::create_dir_all(&corpus).map_err(|e| e.to_string())?;
+        let seeds = r.join("web/fuzz/seeds").join(target);
+        run_env(
+            &cargo(),
+            &[
+                "fuzz",
+                "run",
+                "--fuzz-dir",
+                "web/fuzz",
+                target,
+                &corpus.to_string_lossy(),
+                &seeds.to_string_lossy(),
+                "--",
+                &format!("-runs={runs}"),
+                "-max_len=16384",
+                "-print_final_stats=1",
+            ],
+            &[("RUSTC_BOOTSTRAP", "1")],
+        )?;
+    }
+    Ok(())
 }
