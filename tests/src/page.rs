@@ -87,6 +87,15 @@ impl Page {
             .unwrap_or_default()
     }
 
+    /// Paths our server was asked for so far.
+    #[must_use]
+    pub fn server_paths(&self) -> Vec<String> {
+        self.server
+            .as_ref()
+            .map(StaticServer::paths)
+            .unwrap_or_default()
+    }
+
     /// Requests our server has answered so far.
     #[must_use]
     pub fn server_hits(&self) -> usize {

@@ -10,6 +10,7 @@ pub struct StaticServer {
     pub url: String,
     server: std::sync::Arc<tiny_http::Server>,
     hits: std::sync::Arc<std::sync::atomic::AtomicUsize>,
+    paths: std::sync::Arc<std::sync::Mutex<Vec<String>>>,
     handle: Option<thread::JoinHandle<()>>,
 }
 
@@ -51,9 +52,14 @@ impl StaticServer {
         let p = prefix.clone();
         let hits = std::sync::Arc::new(std::sync::atomic::AtomicUsize::new(0));
         let counter = hits.clone();
+        let paths = std::sync::Arc::new(std::sync::Mutex::new(Vec::new()));
+        let seen = paths.clone();
         let handle = thread::spawn(move || {
             for req in s.incoming_requests() {
                 counter.fetch_add(1, std::sync::atomic::Ordering::SeqCst);
+                if let Ok(mut v) = seen.lock() {
+                    v.push(req.url().to_string());
+                }
                 let url = req
                     .url()
                     .split(['?', '#'])
@@ -80,6 +86,7 @@ impl StaticServer {
             url: format!("http://127.0.0.1:{port}{prefix}"),
             server,
             hits,
+            paths,
             handle: Some(handle),
         })
     }
@@ -101,6 +108,12 @@ fn resolve(root: &Path, prefix: &str, url: &str) -> Option<PathBuf> {
 }
 
 impl StaticServer {
+    /// The paths requested so far, in order.
+    #[must_use]
+    pub fn paths(&self) -> Vec<String> {
+        self.paths.lock().map(|v| v.clone()).unwrap_or_default()
+    }
+
     /// How many requests the server has received.
     #[must_use]
     pub fn hits(&self) -> usize {

@@ -39,6 +39,11 @@ pub fn App() -> impl IntoView {
     let storage_problem = RwSignal::new(storage_problem);
     let start_link = start.to_link();
     browser::set_hash(&start_link, false);
+    // The case on screen is the one a reload or restart brings back, also before any edit.
+    let storage_problem_now = browser::store(CURRENT_KEY, &start_link).err();
+    if storage_problem.get_untracked().is_none() {
+        storage_problem.set(storage_problem_now);
+    }
     let policy = StoredValue::new(HistoryPolicy::new(start_link));
     let form = RwSignal::new(start.to_form());
 

@@ -87,7 +87,8 @@ pub fn page(glue: &str, wasm: &[u8], css: &str, icon_svg: &str) -> String {
 }
 
 /// The service worker: network first, so an online visit always gets the newest build and
-/// refreshes the cache; the cache answers when the network is off. The cache name carries a
+/// refreshes the cache; the cache answers when the network is off or the server fails (a
+/// server error never replaces a working offline page). The cache name carries a
 /// hash of the page, so a new build replaces the old cache when it activates.
 #[must_use]
 pub fn service_worker(page: &str) -> String {
@@ -112,13 +113,16 @@ self.addEventListener("fetch", (event) => {{
   event.respondWith(
     fetch(req)
       .then((res) => {{
-        if (res.ok) {{
-          const copy = res.clone();
-          caches.open(CACHE).then((c) => c.put(req, copy));
-        }}
+        if (!res.ok) throw new Error("HTTP " + res.status);
+        const copy = res.clone();
+        caches.open(CACHE).then((c) => c.put(req, copy));
         return res;
       }})
-      .catch(() => caches.match(req, {{ ignoreSearch: true }}).then((hit) => hit || caches.match("index.html")))
+      .catch(() =>
+        caches.match(req, {{ ignoreSearch: true }})
+          .then((hit) => hit || caches.match("index.html"))
+          .then((hit) => hit || fetch(req))
+      )
   );
 }});
 "#
