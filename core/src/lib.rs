@@ -29,9 +29,11 @@ pub mod invariants;
 pub mod mohr;
 pub mod principal;
 pub mod rosette;
+pub mod section;
 pub mod tensor;
 pub mod transform;
 pub mod units;
+pub mod vessel;
 
 pub use equivalent::Equivalent;
 pub use error::StressError;
