@@ -46,6 +46,9 @@ fn plane_case_typed_in_matches_core() {
         p.check_circle(role, c.centre, c.radius);
     }
     p.check_circle("inplane", ip.centre, ip.radius);
+    assert!(p
+        .text("document.getElementById('circle-legend').textContent")
+        .contains("out-of-plane circles through σz = 0"));
     // Principal points sit on the σ axis at core's values, labelled with value and unit.
     for (role, v) in [("s1", pr[0]), ("s3", pr[2])] {
         let (ox, oy, k, ..) = p.circle("c13");
@@ -102,6 +105,10 @@ fn full_3d_case_draws_three_circles_from_core() {
     for (role, c) in [("c13", m.c13), ("c12", m.c12), ("c23", m.c23)] {
         p.check_circle(role, c.centre, c.radius);
     }
+    // The diagram says which circle is which.
+    assert!(p
+        .text("document.getElementById('circle-legend').textContent")
+        .contains("C13 through σ1 and σ3"));
     let has_inplane =
         p.b.eval("document.querySelector('circle[data-role=\"inplane\"]') !== null")
             .unwrap();

@@ -105,6 +105,8 @@ pub struct Picture {
     pub tau_label: String,
     /// One line saying how turning the element moves its point.
     pub rotation_note: &'static str,
+    /// Which circle is which, in words.
+    pub legend: &'static str,
 }
 
 fn value(v: f64, unit: &str) -> String {
@@ -306,6 +308,11 @@ pub fn picture(e: &Evaluation) -> Picture {
         sigma_label: format!("σ ({unit})"),
         tau_label: format!("{} ({unit})", axis.label()),
         rotation_note: axis.rotation_note(),
+        legend: if plane {
+            "Amber, solid: the x–y circle through X and Y. Dashed: the two out-of-plane circles through σz = 0 — the largest circle, not always the amber one, gives the absolute maximum shear. Point N: the plane by its normal."
+        } else {
+            "Ink: C13 through σ1 and σ3. Teal: C12. Violet: C23. Every plane's (σn, |τn|) lies inside C13 and outside the two smaller circles; X, Y, X′, Y′ and N are faces and the chosen plane."
+        },
     }
 }
 
@@ -419,6 +426,7 @@ fn draw(p: &Picture) -> impl IntoView {
             <text class="axis-label" x=f.left + f.width y=f.top + f.height + 34.0 text-anchor="end">{p.sigma_label.clone()}</text>
             <text class="axis-label" id="tau-axis-label" x=f.left y=f.top - 12.0>{p.tau_label.clone()}</text>
         </svg>
+        <p class="hint" id="circle-legend">{p.legend}</p>
         <p class="hint" id="rotation-note">{format!("Shear axis: {}.", p.rotation_note)}</p>
     }
 }

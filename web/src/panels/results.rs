@@ -97,9 +97,21 @@ pub fn groups(e: &Evaluation) -> Vec<Group> {
         num("sigma1", "σ1", s1, u),
         num("sigma2", "σ2", s2, u),
         num("sigma3", "σ3", s3, u),
-        text("n1", "direction of σ1", vector(&n1)),
-        text("n2", "direction of σ2", vector(&n2)),
-        text("n3", "direction of σ3", vector(&n3)),
+        text(
+            "n1",
+            "direction n1 of σ1 (unit vector in x, y, z)",
+            vector(&n1),
+        ),
+        text(
+            "n2",
+            "direction n2 of σ2 (unit vector in x, y, z)",
+            vector(&n2),
+        ),
+        text(
+            "n3",
+            "direction n3 of σ3 (unit vector in x, y, z)",
+            vector(&n3),
+        ),
     ];
     let in_plane_title = if e.mode == Mode::Plane {
         "in-plane"
