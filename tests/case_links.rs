@@ -4,11 +4,14 @@
 //! message naming the problem. Saved-case files written by this release read back.
 
 use serde_json::Value;
+use std::collections::BTreeMap;
+use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
 use stresscase_core::{AngleUnit, ShearAxis, StressUnit};
 use stresscase_tests::check::data_path;
 use stresscase_web::case::Mode;
 use stresscase_web::link::{Case, LinkError};
 use stresscase_web::saved::Library;
+use stresscase_web::source::{tokens, Choices, Num};
 
 fn expected(v: &Value) -> Case {
     let nums = |k: &str| -> Vec<f64> {
@@ -20,6 +23,73 @@ fn expected(v: &Value) -> Case {
     };
     let s = nums("stress");
     let n = nums("normal");
+    // Cases without a "source" are typed components with the default elastic constants
+    // (E = 200 GPa, ν = 0.3, α = 12 µε/K, ΔT = 0 K: the documented defaults).
+    let mut choices = Choices::default();
+    let mut numbers: BTreeMap<Num, f64> = [
+        (Num::E, 200.0),
+        (Num::Nu, 0.3),
+        (Num::Alpha, 12.0),
+        (Num::DeltaT, 0.0),
+    ]
+    .into_iter()
+    .collect();
+    if let Some(src) = v.get("source") {
+        let word = |k: &str| src["choices"][k].as_str();
+        let c = &mut choices;
+        if let Some(t) = word("src") {
+            c.source = tokens::value(&tokens::SOURCE, t).expect("src");
+        }
+        if let Some(t) = word("kind") {
+            c.kind = tokens::value(&tokens::KIND, t).expect("kind");
+        }
+        if let Some(t) = word("lu") {
+            c.length = LengthUnit::from_symbol(t).expect("lu");
+        }
+        if let Some(t) = word("fu") {
+            c.force = ForceUnit::from_symbol(t).expect("fu");
+        }
+        if let Some(t) = word("mu") {
+            c.moment = MomentUnit::from_token(t).expect("mu");
+        }
+        if let Some(t) = word("pu") {
+            c.pressure = StressUnit::from_symbol(t).expect("pu");
+        }
+        if let Some(t) = word("ends") {
+            c.ends = tokens::value(&tokens::ENDS, t).expect("ends");
+        }
+        if let Some(t) = word("face") {
+            c.face = tokens::value(&tokens::FACE, t).expect("face");
+        }
+        if let Some(t) = word("surf") {
+            c.surface = tokens::value(&tokens::SURFACE, t).expect("surf");
+        }
+        if let Some(t) = word("layout") {
+            c.layout = tokens::value(&tokens::LAYOUT, t).expect("layout");
+        }
+        if let Some(t) = word("ng") {
+            c.gauges = t.parse().expect("ng");
+        }
+        if let Some(t) = word("su") {
+            c.strain_unit = StrainUnit::from_token(t).expect("su");
+        }
+        if let Some(t) = word("tsc") {
+            c.correct = t == "on";
+        }
+        if let Some(t) = word("cond") {
+            c.condition = tokens::value(&tokens::CONDITION, t).expect("cond");
+        }
+        if let Some(t) = word("eu") {
+            c.modulus_unit = StressUnit::from_symbol(t).expect("eu");
+        }
+        for (k, x) in src["numbers"].as_object().expect("numbers") {
+            let num = Num::all()
+                .into_iter()
+                .find(|n| n.key() == k)
+                .unwrap_or_else(|| panic!("no number with key {k}"));
+            numbers.insert(num, x.as_f64().expect("number"));
+        }
+    }
     Case {
         title: v["title"].as_str().expect("title").into(),
         note: v["note"].as_str().expect("note").into(),
@@ -42,6 +112,8 @@ fn expected(v: &Value) -> Case {
         } else {
             ShearAxis::PositiveDown
         },
+        choices,
+        numbers,
     }
 }
 

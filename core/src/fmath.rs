@@ -28,4 +28,20 @@ shim! {
     acos(x)
     /// √(x² + y²) without undue overflow or underflow.
     hypot(x, y)
+    /// e to the power x.
+    exp(x)
+    /// Hyperbolic tangent.
+    tanh(x)
+}
+
+/// `x` wrapped into [0, period) (the Euclidean remainder, which `core` lacks for floats).
+#[inline]
+#[must_use]
+pub fn wrap(x: f64, period: f64) -> f64 {
+    let r = x % period;
+    if r < 0.0 {
+        r + period
+    } else {
+        r
+    }
 }

@@ -79,6 +79,18 @@ impl Strain {
     }
 }
 
+impl Strain {
+    /// Principal strains ε1 ≥ ε2 ≥ ε3 (the strain tensor with halved shears has the same
+    /// eigen-algebra as a stress tensor).
+    ///
+    /// # Errors
+    /// [`StressError::NonFinite`] if a component is not finite.
+    pub fn principal(&self) -> Result<[f64; 3], StressError> {
+        let [a, b, c, d, e, f] = self.tensor_components();
+        StressTensor::new(a, b, c, d, e, f).map(|t| crate::principal::principal_values(&t))
+    }
+}
+
 impl Elastic {
     /// Validated constants.
     ///
@@ -245,6 +257,17 @@ mod tests {
         // Fully restrained heating: σ = −EαΔT/(1 − 2ν) in every direction (standard result).
         let r = m.stress(&Strain::default(), th).unwrap();
         assert!((r.sx() + 200e3 * th / (1.0 - 0.6)).abs() < 1e-9);
+    }
+
+    #[test]
+    fn principal_strains_of_pure_shear() {
+        // γxy = γ alone: ε1,3 = ±γ/2 (strain transformation, e.g. Gere & Goodno §7.7, from memory).
+        let e = Strain {
+            gxy: 4e-4,
+            ..Strain::default()
+        };
+        let p = e.principal().unwrap();
+        assert!((p[0] - 2e-4).abs() < 1e-18 && p[1].abs() < 1e-18 && (p[2] + 2e-4).abs() < 1e-18);
     }
 
     #[test]

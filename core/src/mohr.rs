@@ -56,6 +56,15 @@ impl ShearAxis {
         }
     }
 
+    /// The direction of positive shear in words ("positive downward ↓"), for any shear-like axis.
+    #[must_use]
+    pub fn direction(self) -> &'static str {
+        match self {
+            Self::PositiveDown => "positive downward ↓",
+            Self::PositiveUp => "positive upward ↑",
+        }
+    }
+
     /// How turning the element turns the point on the diagram.
     #[must_use]
     pub fn rotation_note(self) -> &'static str {

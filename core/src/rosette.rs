@@ -167,6 +167,18 @@ pub fn reduce(
 }
 
 impl RosetteStrain {
+    /// Normal strain ε and half the engineering shear strain γ/2 on the direction at `angle`
+    /// (radians from x): the point of that direction on the strain Mohr circle, by the same
+    /// transformation as stress with τ = γ/2.
+    ///
+    /// # Errors
+    /// [`StressError::NonFinite`] for a non-finite angle.
+    pub fn on_direction(&self, angle: f64) -> Result<(f64, f64), StressError> {
+        let t = StressTensor::plane(self.ex, self.ey, 0.5 * self.gxy)?;
+        let r = crate::transform::rotate_about_z(&t, angle)?;
+        Ok((r.sx(), r.txy()))
+    }
+
     /// The plane-stress state at the gauged surface by Hooke's law.
     ///
     /// # Errors
@@ -278,6 +290,17 @@ mod tests {
             reduce(&gauges(&RECTANGULAR, &[0.0; 3]), bad),
             Err(RosetteError::BadTransverse)
         );
+    }
+
+    #[test]
+    fn each_gauge_direction_lies_on_the_strain_circle() {
+        let r = reduce(&gauges(&RECTANGULAR, &[850e-6, 210e-6, -320e-6]), None).unwrap();
+        let (c, rad) = (0.5 * (r.principal[0] + r.principal[1]), 0.5 * r.gamma_max);
+        for th in [0.0, 0.3, 1.2, 2.9] {
+            let (e, g2) = r.on_direction(th).unwrap();
+            assert!(((e - c).hypot(g2) - rad).abs() < 1e-15);
+            assert!((e - reading(r.ex, r.ey, r.gxy, th)).abs() < 1e-15);
+        }
     }
 
     #[test]

@@ -14,6 +14,8 @@
 //! A wall thicker than about a tenth of the radius makes the thin-wall formulas unreliable
 //! (common practice); [`thin_wall_warning`] says so.
 
+use crate::error::StressError;
+use crate::tensor::StressTensor;
 use core::fmt;
 #[cfg(feature = "serde")]
 use serde::{Deserialize, Serialize};
@@ -39,6 +41,8 @@ pub enum VesselError {
     OutsideWall,
     /// A pressure is not finite.
     Pressure(&'static str),
+    /// A thin vessel's wall is not thinner than its radius.
+    WallTooThick,
 }
 
 impl fmt::Display for VesselError {
@@ -53,6 +57,10 @@ impl fmt::Display for VesselError {
                 "the point must lie in the wall, between the inner and outer radius"
             ),
             Self::Pressure(n) => write!(f, "{n} must be a finite number"),
+            Self::WallTooThick => write!(
+                f,
+                "the wall thickness must be smaller than the radius (use the tube section for thick walls)"
+            ),
         }
     }
 }
@@ -69,11 +77,30 @@ pub struct WallStress {
     pub axial: f64,
 }
 
+impl WallStress {
+    /// The tensor in point axes: x axial, y hoop, z radial (the axes of
+    /// [`crate::section`]'s point frame, so a vessel and a tube read alike). No shear.
+    ///
+    /// # Errors
+    /// [`StressError::NonFinite`] if a stress overflowed.
+    pub fn tensor(&self) -> Result<StressTensor, StressError> {
+        StressTensor::new(self.axial, self.hoop, self.radial, 0.0, 0.0, 0.0)
+    }
+}
+
 fn positive(v: f64, name: &'static str) -> Result<f64, VesselError> {
     if v.is_finite() && v > 0.0 {
         Ok(v)
     } else {
         Err(VesselError::Dimension(name))
+    }
+}
+
+fn thinner(r: f64, t: f64) -> Result<(), VesselError> {
+    if t < r {
+        Ok(())
+    } else {
+        Err(VesselError::WallTooThick)
     }
 }
 
@@ -89,7 +116,8 @@ fn finite(v: f64, name: &'static str) -> Result<f64, VesselError> {
 /// surface (σr = 0) or the inner surface (σr = −p).
 ///
 /// # Errors
-/// [`VesselError`] for a non-positive dimension or non-finite pressure.
+/// [`VesselError`] for a non-positive dimension, a wall not thinner than the radius, or a
+/// non-finite pressure.
 pub fn thin_cylinder(
     p: f64,
     r: f64,
@@ -102,6 +130,7 @@ pub fn thin_cylinder(
         positive(r, "radius")?,
         positive(t, "wall thickness")?,
     );
+    thinner(r, t)?;
     Ok(WallStress {
         radial: if inner_surface { -p } else { 0.0 },
         hoop: p * r / t,
@@ -116,13 +145,15 @@ pub fn thin_cylinder(
 /// Thin sphere of mean radius `r` and wall `t` under internal pressure `p`.
 ///
 /// # Errors
-/// [`VesselError`] for a non-positive dimension or non-finite pressure.
+/// [`VesselError`] for a non-positive dimension, a wall not thinner than the radius, or a
+/// non-finite pressure.
 pub fn thin_sphere(p: f64, r: f64, t: f64, inner_surface: bool) -> Result<WallStress, VesselError> {
     let (p, r, t) = (
         finite(p, "pressure")?,
         positive(r, "radius")?,
         positive(t, "wall thickness")?,
     );
+    thinner(r, t)?;
     let s = p * r / (2.0 * t);
     Ok(WallStress {
         radial: if inner_surface { -p } else { 0.0 },
@@ -194,6 +225,10 @@ mod tests {
         );
         assert!(
             thin_wall_warning(100.0, 12.0).is_some() && thin_wall_warning(100.0, 5.0).is_none()
+        );
+        assert_eq!(
+            thin_sphere(1.0, 10.0, 10.0, false),
+            Err(VesselError::WallTooThick)
         );
     }
 

@@ -137,6 +137,40 @@ impl Page {
         self.value(key)
     }
 
+    /// Picks `value` in the drop-down `#id`, as a user's choice does (a `change` event).
+    pub fn choose(&mut self, id: &str, value: &str) {
+        let ok = self
+            .b
+            .eval(&format!(
+                "(() => {{ const s = document.getElementById({id:?}); if (!s) return false; s.value = {value:?}; if (s.value !== {value:?}) return false; s.dispatchEvent(new Event('change', {{ bubbles: true }})); return true; }})()"
+            ))
+            .expect("choose");
+        assert_eq!(ok, Value::Bool(true), "no option {value:?} in #{id}");
+    }
+
+    /// Waits until the element `#id` exists.
+    pub fn wait_for_id(&mut self, id: &str) {
+        self.b
+            .wait_for(&format!("document.getElementById({id:?}) !== null"), WAIT)
+            .unwrap_or_else(|e| panic!("#{id} never appeared: {e}"));
+    }
+
+    /// Waits until `js` (a number expression) reads `want` (relative 1e-9), then returns it.
+    pub fn wait_number(&mut self, what: &str, js: &str, want: f64) -> f64 {
+        let check = format!(
+            "(() => {{ const v = +({js}); return Math.abs(v - ({want:e})) <= 1e-9 * Math.max(1, Math.abs({want:e})); }})()"
+        );
+        if let Err(e) = self.b.wait_for(&check, WAIT) {
+            let got = self.b.eval(js).unwrap_or_default();
+            panic!("{what}: page shows {got}, core says {want:e}: {e}");
+        }
+        self.b
+            .eval(js)
+            .ok()
+            .and_then(|v| v.as_f64())
+            .unwrap_or(f64::NAN)
+    }
+
     /// (ox, oy, k, cx, cy, r) of the drawn circle `role`.
     pub fn circle(&mut self, role: &str) -> (f64, f64, f64, f64, f64, f64) {
         let v: Value = self

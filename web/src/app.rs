@@ -5,10 +5,12 @@ use crate::case::{CaseForm, Evaluation};
 use crate::history::{HistoryAction, HistoryPolicy};
 use crate::link::Case;
 use crate::panels::{
-    case_shelf::CaseShelf, caution::CautionNote, element_turn::ElementTurn,
-    link_notice::LinkNotice, mohr_diagram::MohrDiagram, plane_probe::PlaneProbe,
-    results::ResultsPanel, stale_notice::StaleNotice, stress_element::StressElement,
-    stress_entry::StressEntry,
+    case_shelf::CaseShelf, caution::CautionNote, elastic_entry::ElasticEntry,
+    element_turn::ElementTurn, link_notice::LinkNotice, mohr_diagram::MohrDiagram,
+    number_field::SharedResult, plane_probe::PlaneProbe, results::ResultsPanel,
+    rosette_entry::RosetteEntry, scan_plot::ScanPlot, section_loads::SectionLoads,
+    source_pick::SourcePick, stale_notice::StaleNotice, strain_circle::StrainCircle,
+    strain_entry::StrainEntry, stress_element::StressElement, stress_entry::StressEntry,
 };
 use leptos::prelude::*;
 
@@ -101,25 +103,33 @@ pub fn App() -> impl IntoView {
             },
         );
     let stale = Memo::new(move |_| result.with(Result::is_err));
+    provide_context::<SharedResult>(result);
 
     view! {
         <header class="masthead">
             <h1>"Stresscase"</h1>
-            <p class="tagline">"Stress state at one critical point: principal stresses, all three Mohr's circles, the plane that matters."</p>
+            <p class="tagline">"Stress state at one critical point — from loads, gauges or strains — with its principal stresses, all three Mohr's circles and the plane that matters."</p>
         </header>
         <CautionNote/>
         <LinkNotice problem=link_problem/>
         <main class="bench">
             <div class="inputs">
-                <StressEntry form=form/>
+                <SourcePick form=form shown=shown/>
+                <SectionLoads form=form shown=shown/>
+                <RosetteEntry form=form shown=shown/>
+                <StrainEntry form=form/>
+                <StressEntry form=form shown=shown/>
+                <ElasticEntry form=form/>
                 <ElementTurn form=form shown=shown/>
                 <PlaneProbe form=form shown=shown/>
                 <CaseShelf form=form storage_problem=storage_problem/>
             </div>
             <div class="pictures" class:stale=move || stale.get()>
-                <StaleNotice result=result/>
+                <StaleNotice form=form result=result/>
                 <MohrDiagram form=form shown=shown/>
                 <StressElement shown=shown/>
+                <ScanPlot form=form shown=shown/>
+                <StrainCircle shown=shown/>
             </div>
         </main>
         <ResultsPanel shown=shown stale=stale/>
@@ -130,6 +140,8 @@ pub fn App() -> impl IntoView {
                 <li>"θ turns x′ counter-clockwise from x towards y, about z pointing out of the page."</li>
                 <li>"Principal stresses are ordered σ1 ≥ σ2 ≥ σ3; directions are unit vectors in x, y, z."</li>
                 <li>"Mohr diagram: a face whose normal is at φ plots at (σn, τnt), t being n turned +90°, so X = (σx, τxy) and Y = (σy, −τxy). The shear axis direction is chosen above the diagram and written on it."</li>
+                <li>"Sections: x along the member; loads act on the +x face, positive by the right-hand rule. Stresses at a section point are in point axes: x along the member, y along the perimeter, z into the section."</li>
+                <li>"Strains: engineering shear γ = 2ε; rosette gauge angles counter-clockwise from x."</li>
                 <li>"Lode angle θL from cos 3θL = 3√3·J3 / (2·J2^1.5): 0° uniaxial tension, 30° pure shear, 60° uniaxial compression."</li>
             </ul>
         </footer>

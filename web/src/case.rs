@@ -4,10 +4,14 @@
 use crate::entry::parse_number;
 use crate::link::{check_text, Case, MAX_NOTE, MAX_TITLE};
 use crate::numfmt::format_for_entry;
+use crate::source::{self, Choices, Num, Numbers, Outcome, Quantity, Source};
 use nalgebra::Vector3;
+use std::collections::BTreeMap;
 use stresscase_core::equivalent::Equivalent;
+use stresscase_core::hooke::Strain;
 use stresscase_core::invariants::{deviatoric, Invariants};
 use stresscase_core::transform::{face_normal_about_z, rotate_about_z, InPlane, PlaneTraction};
+use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
 use stresscase_core::{
     AngleUnit, Mohr3d, PlaneMohr, Principal, ShearAxis, StressTensor, StressUnit,
 };
@@ -49,6 +53,8 @@ pub enum Field {
     Title,
     /// Case note (text).
     Note,
+    /// A number of a source path (section, rosette, strains, elastic constants).
+    Src(Num),
 }
 
 impl Field {
@@ -80,6 +86,7 @@ impl Field {
             Field::Nz => "nz",
             Field::Title => "title",
             Field::Note => "note",
+            Field::Src(n) => n.key(),
         }
     }
 
@@ -99,6 +106,7 @@ impl Field {
             Field::Nz => "in-nz",
             Field::Title => "in-title",
             Field::Note => "in-note",
+            Field::Src(n) => n.id(),
         }
     }
 
@@ -139,6 +147,10 @@ pub struct CaseForm {
     pub normal: [String; 3],
     /// How positive shear is drawn.
     pub shear_axis: ShearAxis,
+    /// Where the stress comes from, and the choices of that path.
+    pub choices: Choices,
+    /// The text of every source number (kept when the path changes, so nothing typed is lost).
+    pub nums: BTreeMap<Num, String>,
     /// What was last typed into each stress field and in which unit, so unit changes always
     /// convert from the typed value and changing back restores it exactly.
     typed: [(String, StressUnit); 6],
@@ -167,6 +179,85 @@ impl CaseForm {
             angle_unit: AngleUnit::Degree,
             normal: ["1".into(), "1".into(), "1".into()],
             shear_axis: ShearAxis::PositiveDown,
+            choices: Choices::default(),
+            nums: Num::all()
+                .into_iter()
+                .map(|n| (n, n.demo_text().to_string()))
+                .collect(),
+        }
+    }
+
+    /// The label of a field as the page shows it (some depend on the section kind).
+    #[must_use]
+    pub fn label(&self, field: Field) -> String {
+        match field {
+            Field::Src(n) => n.label(&self.choices),
+            f => f.label().to_string(),
+        }
+    }
+
+    /// The unit shown beside a field ("" for a pure number such as a normal component).
+    #[must_use]
+    pub fn unit_of(&self, field: Field) -> &'static str {
+        match field {
+            Field::Angle => self.angle_unit.symbol(),
+            Field::Nx | Field::Ny | Field::Nz | Field::Title | Field::Note => "",
+            Field::Src(n) => n.unit(&self.choices, self.angle_unit),
+            _ => self.unit.symbol(),
+        }
+    }
+
+    /// Changes the length unit, converting typed lengths.
+    pub fn change_length_unit(&mut self, to: LengthUnit) {
+        self.convert_quantity(Quantity::Length, self.choices.length.metres() / to.metres());
+        self.choices.length = to;
+    }
+
+    /// Changes the force unit, converting typed forces.
+    pub fn change_force_unit(&mut self, to: ForceUnit) {
+        self.convert_quantity(Quantity::Force, self.choices.force.newtons() / to.newtons());
+        self.choices.force = to;
+    }
+
+    /// Changes the moment unit, converting typed moments.
+    pub fn change_moment_unit(&mut self, to: MomentUnit) {
+        let k = self.choices.moment.newton_metres() / to.newton_metres();
+        self.convert_quantity(Quantity::Moment, k);
+        self.choices.moment = to;
+    }
+
+    /// Changes the pressure unit, converting typed pressures.
+    pub fn change_pressure_unit(&mut self, to: StressUnit) {
+        self.convert_quantity(Quantity::Pressure, self.choices.pressure.convert(1.0, to));
+        self.choices.pressure = to;
+    }
+
+    /// Changes the unit of E, converting it.
+    pub fn change_modulus_unit(&mut self, to: StressUnit) {
+        self.convert_quantity(
+            Quantity::Modulus,
+            self.choices.modulus_unit.convert(1.0, to),
+        );
+        self.choices.modulus_unit = to;
+    }
+
+    /// Changes the strain unit, converting readings and strains.
+    pub fn change_strain_unit(&mut self, to: StrainUnit) {
+        self.convert_quantity(
+            Quantity::Strain,
+            self.choices.strain_unit.factor() / to.factor(),
+        );
+        self.choices.strain_unit = to;
+    }
+
+    /// Multiplies every number field of `quantity` that reads by `factor` (a unit change).
+    pub fn convert_quantity(&mut self, quantity: Quantity, factor: f64) {
+        for (n, text) in &mut self.nums {
+            if n.quantity() == quantity {
+                if let Ok(v) = parse_number(text) {
+                    *text = format_for_entry(v * factor);
+                }
+            }
         }
     }
 
@@ -180,6 +271,7 @@ impl CaseForm {
             Field::Nz => &self.normal[2],
             Field::Title => &self.title,
             Field::Note => &self.note,
+            Field::Src(n) => self.nums.get(&n).map_or("", String::as_str),
             f => &self.stress[stress_index(f)],
         }
     }
@@ -193,6 +285,9 @@ impl CaseForm {
             Field::Nz => self.normal[2] = text,
             Field::Title => self.title = text,
             Field::Note => self.note = text,
+            Field::Src(n) => {
+                self.nums.insert(n, text);
+            }
             f => {
                 let i = stress_index(f);
                 self.typed[i] = (text.clone(), self.unit);
@@ -204,7 +299,14 @@ impl CaseForm {
     /// Whether a field takes part in the current mode.
     #[must_use]
     pub fn is_active(&self, field: Field) -> bool {
-        !(self.mode == Mode::Plane && field.out_of_plane())
+        match field {
+            Field::Src(n) => self.choices.active().contains(&n),
+            f if Field::STRESS.contains(&f) => {
+                self.choices.source == Source::Typed
+                    && !(self.mode == Mode::Plane && f.out_of_plane())
+            }
+            _ => true,
+        }
     }
 
     /// Changes the stress unit keeping the physical stresses: every field that reads as a number
@@ -220,10 +322,19 @@ impl CaseForm {
         self.unit = to;
     }
 
-    /// Changes the angle unit, converting θ if it reads as a number.
+    /// Changes the angle unit, converting θ, the section point angle and gauge angles that read.
     pub fn change_angle_unit(&mut self, to: AngleUnit) {
-        if let Ok(v) = parse_number(&self.angle) {
-            self.angle = format_for_entry(to.from_radians(self.angle_unit.to_radians(v)));
+        let from = self.angle_unit;
+        let convert = |text: &mut String| {
+            if let Ok(v) = parse_number(text) {
+                *text = format_for_entry(to.from_radians(from.to_radians(v)));
+            }
+        };
+        convert(&mut self.angle);
+        for (n, text) in &mut self.nums {
+            if n.quantity() == Quantity::Angle {
+                convert(text);
+            }
         }
         self.angle_unit = to;
     }
@@ -282,7 +393,34 @@ impl Case {
                 message: e.to_string(),
             }]
         };
-        let tensor = StressTensor::new(c[0], c[1], c[2], c[3], c[4], c[5])
+        let from_source = |p: source::SourceProblem| {
+            vec![FieldProblem {
+                field: Field::Src(p.num),
+                message: p.message,
+            }]
+        };
+        let derived = source::evaluate(&self.choices, self, self.unit, self.angle_unit)
+            .map_err(from_source)?;
+        let (tensor, outcome, mode) = match derived {
+            Some((t, o)) => {
+                let mode = if t.is_plane() {
+                    Mode::Plane
+                } else {
+                    Mode::Full
+                };
+                (t, Some(o), mode)
+            }
+            None => (
+                StressTensor::new(c[0], c[1], c[2], c[3], c[4], c[5])
+                    .map_err(|e| fail(Field::Sx, e))?,
+                None,
+                self.mode,
+            ),
+        };
+        let (material, thermal) = source::elastic(&self.choices, self).map_err(from_source)?;
+        let strain = tensor
+            .scaled(self.unit.pascals())
+            .map(|t| material.strain(&t, thermal))
             .map_err(|e| fail(Field::Sx, e))?;
         let theta = self.angle_unit.to_radians(angle);
         let probe = PlaneTraction::on(&tensor, Vector3::new(n[0], n[1], n[2]))
@@ -305,12 +443,15 @@ impl Case {
         let in_plane = InPlane::of(&tensor);
         Ok(Evaluation {
             unit: self.unit,
-            mode: self.mode,
+            mode,
+            choices: self.choices,
+            outcome,
+            strain,
             shear_axis: self.shear_axis,
             tensor,
             theta,
             principal: Principal::of(&tensor),
-            out_of_plane_governs: self.mode == Mode::Plane
+            out_of_plane_governs: mode == Mode::Plane
                 && mohr3d.out_of_plane_shear_governs(&in_plane),
             in_plane,
             plane_mohr,
@@ -330,13 +471,27 @@ fn stress_index(f: Field) -> usize {
     Field::STRESS.iter().position(|&g| g == f).unwrap_or(0)
 }
 
+impl Numbers for Case {
+    fn get(&self, n: Num) -> f64 {
+        self.numbers.get(&n).copied().unwrap_or(0.0)
+    }
+}
+
 /// Everything core says about the case, in the case's stress unit (angles in radians).
 #[derive(Debug, Clone, PartialEq)]
 pub struct Evaluation {
     /// Unit of every stress below.
     pub unit: StressUnit,
-    /// Mode it was entered in.
+    /// Plane or 3D: as entered for typed components; for a derived tensor, plane exactly when
+    /// σz = τyz = τzx = 0.
     pub mode: Mode,
+    /// The source path and its choices (units of the source results).
+    pub choices: Choices,
+    /// What the source path found besides the tensor (None for typed components).
+    pub outcome: Option<Outcome>,
+    /// The strain state of this stress by Hooke's law with the case's E, ν and α·ΔT
+    /// (dimensionless, engineering shear).
+    pub strain: Strain,
     /// Shear plotting convention.
     pub shear_axis: ShearAxis,
     /// The validated tensor.
@@ -435,6 +590,44 @@ mod tests {
         f.set_text(Field::Sy, "oops".into());
         f.change_unit(StressUnit::Ksi);
         assert_eq!(f.text(Field::Sy), "oops");
+    }
+
+    #[test]
+    fn source_unit_changes_keep_the_stress() {
+        let mut f = CaseForm::demo();
+        f.choices.source = Source::Section;
+        f.choices.kind = source::SectionKind::Tube;
+        let before = f.evaluate().unwrap().tensor;
+        f.change_length_unit(LengthUnit::In);
+        f.change_force_unit(ForceUnit::Lbf);
+        f.change_moment_unit(MomentUnit::LbfFt);
+        f.change_pressure_unit(StressUnit::Psi);
+        f.change_angle_unit(AngleUnit::Radian);
+        let after = f.evaluate().unwrap().tensor;
+        for (a, b) in before.components().iter().zip(after.components()) {
+            assert!((a - b).abs() <= 1e-9 * (1.0 + a.abs()), "{a} vs {b}");
+        }
+        f.choices.source = Source::Rosette;
+        let before = f.evaluate().unwrap().tensor;
+        f.change_strain_unit(StrainUnit::Unit);
+        f.change_modulus_unit(StressUnit::Ksi);
+        let after = f.evaluate().unwrap().tensor;
+        for (a, b) in before.components().iter().zip(after.components()) {
+            assert!((a - b).abs() <= 1e-9 * (1.0 + a.abs()), "{a} vs {b}");
+        }
+    }
+
+    #[test]
+    fn a_core_refusal_is_attached_to_its_field() {
+        let mut f = CaseForm::demo();
+        f.choices.source = Source::Section;
+        f.choices.kind = source::SectionKind::Tube;
+        f.set_text(Field::Src(Num::Di), "45".into());
+        let errs = f.evaluate().unwrap_err();
+        assert_eq!(errs[0].field, Field::Src(Num::Di));
+        // The typed stress fields are not in use on this path.
+        f.set_text(Field::Sx, "junk".into());
+        assert!(!f.is_active(Field::Sx));
     }
 
     #[test]

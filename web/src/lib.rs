@@ -12,3 +12,4 @@ pub mod numfmt;
 pub mod panels;
 pub mod plot;
 pub mod saved;
+pub mod source;

@@ -23,14 +23,22 @@
 //! | `n` | three numbers, not all zero | no (`1,1,1`) |
 //! | `shear` | `down` or `up` | no (`down`) |
 //!
+//! Keys added later to v1 (all optional, each with a default that leaves older links meaning
+//! what they meant): `src` (where the stress comes from), its choices and numbers, and the
+//! elastic constants; see the format document. With `src` other than `typed`, `mode` and the
+//! stress keys are refused: the tensor is derived.
+//!
 //! Decoding is strict: an unknown or repeated key, a missing one, a non-number, a non-finite
 //! number, a text with `<script` or `javascript:`, or a link over 32 KiB is refused with
 //! a [`LinkError`] naming the problem. Nothing in a link is ever run or inserted as markup.
 
 use crate::case::{CaseForm, Field, FieldProblem, Mode};
 use crate::entry::parse_number;
+use crate::source::{tokens, Choices, Layout, Num, Source, ELASTIC, MAX_GAUGES};
 use core::fmt;
 use percent_encoding::{percent_decode_str, utf8_percent_encode, AsciiSet, NON_ALPHANUMERIC};
+use std::collections::BTreeMap;
+use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
 use stresscase_core::{AngleUnit, ShearAxis, StressUnit};
 
 /// The link version this release writes.
@@ -74,6 +82,10 @@ pub struct Case {
     pub normal: [f64; 3],
     /// Shear plotting convention.
     pub shear_axis: ShearAxis,
+    /// Where the stress comes from, and that path's choices.
+    pub choices: Choices,
+    /// The numbers the path uses (exactly [`Choices::active`]), in their entry units.
+    pub numbers: BTreeMap<Num, f64>,
 }
 
 /// Why a link was refused.
@@ -109,6 +121,8 @@ pub enum LinkError {
     ZeroNormal,
     /// A text value that is refused, with the reason.
     BadText(&'static str, &'static str),
+    /// A key the case's source path does not use.
+    NotUsed(&'static str, &'static str),
 }
 
 fn shorten(s: &str) -> String {
@@ -154,6 +168,7 @@ impl fmt::Display for LinkError {
             ),
             Self::ZeroNormal => write!(f, "n: the plane normal has zero length"),
             Self::BadText(k, why) => write!(f, "{k}: {why}"),
+            Self::NotUsed(k, src) => write!(f, "key '{k}' is not used when src={src}"),
         }
     }
 }
@@ -247,6 +262,12 @@ impl Case {
         let stress = Field::STRESS.map(&mut read);
         let angle = read(Field::Angle);
         let normal = Field::NORMAL.map(&mut read);
+        let numbers: BTreeMap<Num, f64> = form
+            .choices
+            .active()
+            .into_iter()
+            .map(|n| (n, read(Field::Src(n))))
+            .collect();
         if normal == [0.0; 3] && !problems.iter().any(|p| Field::NORMAL.contains(&p.field)) {
             problems.push(FieldProblem {
                 field: Field::Nx,
@@ -267,16 +288,20 @@ impl Case {
         if !problems.is_empty() {
             return Err(problems);
         }
+        // A derived tensor has no typed mode or components of its own.
+        let typed = form.choices.source == Source::Typed;
         Ok(Self {
             title: form.title.clone(),
             note: form.note.clone(),
-            mode: form.mode,
+            mode: if typed { form.mode } else { Mode::Plane },
             unit: form.unit,
             stress,
             angle,
             angle_unit: form.angle_unit,
             normal,
             shear_axis: form.shear_axis,
+            choices: form.choices,
+            numbers,
         })
     }
 
@@ -295,6 +320,10 @@ impl Case {
         f.angle_unit = self.angle_unit;
         f.normal = self.normal.map(write_number);
         f.shear_axis = self.shear_axis;
+        f.choices = self.choices;
+        for (&n, &v) in &self.numbers {
+            f.nums.insert(n, write_number(v));
+        }
         f
     }
 
@@ -309,25 +338,30 @@ impl Case {
         if !self.note.is_empty() {
             parts.push(format!("note={}", enc(&self.note)));
         }
-        parts.push(format!(
-            "mode={}",
-            if self.mode == Mode::Plane {
-                "plane"
-            } else {
-                "3d"
-            }
-        ));
-        parts.push(format!("unit={}", self.unit.symbol()));
-        let [sx, sy, sz, txy, tyz, tzx] = self.stress.map(write_number);
-        parts.push(format!("sx={sx}"));
-        parts.push(format!("sy={sy}"));
-        if self.mode == Mode::Full {
-            parts.push(format!("sz={sz}"));
+        let typed = self.choices.source == Source::Typed;
+        if typed {
+            parts.push(format!(
+                "mode={}",
+                if self.mode == Mode::Plane {
+                    "plane"
+                } else {
+                    "3d"
+                }
+            ));
         }
-        parts.push(format!("txy={txy}"));
-        if self.mode == Mode::Full {
-            parts.push(format!("tyz={tyz}"));
-            parts.push(format!("tzx={tzx}"));
+        parts.push(format!("unit={}", self.unit.symbol()));
+        if typed {
+            let [sx, sy, sz, txy, tyz, tzx] = self.stress.map(write_number);
+            parts.push(format!("sx={sx}"));
+            parts.push(format!("sy={sy}"));
+            if self.mode == Mode::Full {
+                parts.push(format!("sz={sz}"));
+            }
+            parts.push(format!("txy={txy}"));
+            if self.mode == Mode::Full {
+                parts.push(format!("tyz={tyz}"));
+                parts.push(format!("tzx={tzx}"));
+            }
         }
         parts.push(format!("theta={}", write_number(self.angle)));
         parts.push(format!(
@@ -347,6 +381,15 @@ impl Case {
                 "up"
             }
         ));
+        // Keys added to version 1 after its first release come last.
+        for (key, value) in choice_pairs(&self.choices) {
+            parts.push(format!("{key}={value}"));
+        }
+        for n in self.choices.active() {
+            if let Some(v) = self.numbers.get(&n) {
+                parts.push(format!("{}={}", n.key(), write_number(*v)));
+            }
+        }
         parts.join("&")
     }
 
@@ -362,7 +405,8 @@ impl Case {
         if s.trim().is_empty() {
             return Err(LinkError::Empty);
         }
-        let mut values: [Option<String>; KEYS.len()] = Default::default();
+        let known = all_keys();
+        let mut values: Vec<Option<String>> = vec![None; known.len()];
         for (i, part) in s.split('&').enumerate() {
             let Some((k, v)) = part.split_once('=') else {
                 return Err(if i == 0 {
@@ -377,19 +421,20 @@ impl Case {
             if i == 0 && k != "v" {
                 return Err(LinkError::NotACaseLink);
             }
-            let Some(slot) = KEYS.iter().position(|&known| known == k) else {
+            let Some(slot) = known.iter().position(|&key| key == k) else {
                 return Err(LinkError::UnknownKey(k.into()));
             };
             if values[slot].is_some() {
-                return Err(LinkError::Repeated(KEYS[slot]));
+                return Err(LinkError::Repeated(known[slot]));
             }
             let text = percent_decode_str(v)
                 .decode_utf8()
-                .map_err(|_| LinkError::BadText(KEYS[slot], "is not valid UTF-8 text"))?;
+                .map_err(|_| LinkError::BadText(known[slot], "is not valid UTF-8 text"))?;
             values[slot] = Some(text.into_owned());
         }
         let take = |key: &'static str| -> Option<&str> {
-            KEYS.iter()
+            known
+                .iter()
                 .position(|&k| k == key)
                 .and_then(|i| values[i].as_deref())
         };
@@ -398,25 +443,60 @@ impl Case {
         if version != LINK_VERSION {
             return Err(LinkError::Version(version.into()));
         }
-        let mode = match required("mode")? {
-            "plane" => Mode::Plane,
-            "3d" => Mode::Full,
-            other => return Err(LinkError::BadChoice("mode", other.into(), "plane, 3d")),
+        let choices = read_choices(&take)?;
+        let typed = choices.source == Source::Typed;
+        let src = tokens::token(&tokens::SOURCE, choices.source);
+        let mode = if typed {
+            match required("mode")? {
+                "plane" => Mode::Plane,
+                "3d" => Mode::Full,
+                other => return Err(LinkError::BadChoice("mode", other.into(), "plane, 3d")),
+            }
+        } else {
+            Mode::Plane
         };
         let unit_text = required("unit")?;
         let unit = StressUnit::from_symbol(unit_text).ok_or_else(|| {
             LinkError::BadChoice("unit", unit_text.into(), "Pa, kPa, MPa, GPa, psi, ksi")
         })?;
         let mut stress = [0.0; 6];
-        for (i, key) in ["sx", "sy", "sz", "txy", "tyz", "tzx"]
+        for (i, key) in ["mode", "sx", "sy", "sz", "txy", "tyz", "tzx"]
             .into_iter()
             .enumerate()
         {
+            if !typed {
+                if take(key).is_some() {
+                    return Err(LinkError::NotUsed(key, src));
+                }
+                continue;
+            }
+            if key == "mode" {
+                continue;
+            }
             let out_of_plane = matches!(key, "sz" | "tyz" | "tzx");
             match (take(key), mode, out_of_plane) {
                 (Some(_), Mode::Plane, true) => return Err(LinkError::NotInMode(key)),
                 (None, Mode::Plane, true) => {}
-                (v, _, _) => stress[i] = read_number(key, v.ok_or(LinkError::Missing(key))?)?,
+                (v, _, _) => {
+                    stress[i - 1] = read_number(key, v.ok_or(LinkError::Missing(key))?)?;
+                }
+            }
+        }
+        let active = choices.active();
+        let mut numbers = BTreeMap::new();
+        for n in Num::all() {
+            let key = n.key();
+            match (take(key), active.contains(&n)) {
+                (Some(_), false) => return Err(LinkError::NotUsed(key, src)),
+                (Some(v), true) => {
+                    numbers.insert(n, read_number(key, v)?);
+                }
+                // Elastic constants came after the first v1 links: absent means the defaults.
+                (None, true) if ELASTIC.contains(&n) => {
+                    numbers.insert(n, n.demo_text().parse().unwrap_or(0.0));
+                }
+                (None, true) => return Err(LinkError::Missing(key)),
+                (None, false) => {}
             }
         }
         let angle = take("theta").map_or(Ok(0.0), |v| read_number("theta", v))?;
@@ -462,8 +542,217 @@ impl Case {
             angle_unit,
             normal,
             shear_axis,
+            choices,
+            numbers,
         })
     }
+}
+
+/// Choice keys of the source paths, in link order.
+const CHOICE_KEYS: [&str; 15] = [
+    "src", "kind", "lu", "fu", "mu", "pu", "ends", "face", "surf", "layout", "ng", "su", "tsc",
+    "cond", "eu",
+];
+
+/// Every key a v1 link may hold.
+fn all_keys() -> Vec<&'static str> {
+    let mut k: Vec<&'static str> = KEYS.to_vec();
+    k.extend(CHOICE_KEYS);
+    k.extend(Num::all().into_iter().map(Num::key));
+    k
+}
+
+/// The choice keys a case uses, with their values, in link order.
+fn choice_pairs(c: &Choices) -> Vec<(&'static str, String)> {
+    use crate::source::SectionKind as K;
+    let mut v: Vec<(&'static str, String)> = Vec::new();
+    match c.source {
+        Source::Typed => {}
+        Source::Section => {
+            v.push(("src", "section".into()));
+            v.push(("kind", tokens::token(&tokens::KIND, c.kind).into()));
+            v.push(("lu", c.length.symbol().into()));
+            if c.has_loads() {
+                v.push(("fu", c.force.symbol().into()));
+                v.push(("mu", c.moment.token().into()));
+            }
+            if c.kind != K::Rectangle {
+                v.push(("pu", c.pressure.symbol().into()));
+            }
+            if matches!(c.kind, K::SolidRound | K::Tube | K::ThinCylinder) {
+                v.push(("ends", tokens::token(&tokens::ENDS, c.ends).into()));
+            }
+            if c.kind == K::Rectangle {
+                v.push(("face", tokens::token(&tokens::FACE, c.face).into()));
+            }
+            if matches!(c.kind, K::ThinCylinder | K::ThinSphere) {
+                v.push(("surf", tokens::token(&tokens::SURFACE, c.surface).into()));
+            }
+        }
+        Source::Rosette => {
+            v.push(("src", "rosette".into()));
+            v.push(("layout", tokens::token(&tokens::LAYOUT, c.layout).into()));
+            if c.layout == Layout::Custom {
+                v.push(("ng", c.gauge_count().to_string()));
+            }
+            v.push(("su", c.strain_unit.token().into()));
+            v.push(("tsc", if c.correct { "on" } else { "off" }.into()));
+        }
+        Source::Strain => {
+            v.push(("src", "strain".into()));
+            v.push((
+                "cond",
+                tokens::token(&tokens::CONDITION, c.condition).into(),
+            ));
+            v.push(("su", c.strain_unit.token().into()));
+        }
+    }
+    v.push(("eu", c.modulus_unit.symbol().into()));
+    v
+}
+
+/// Reads the choice keys (each optional, with the defaults of [`Choices::default`]) and refuses
+/// one that the case's path does not use.
+fn read_choices<'a>(take: &impl Fn(&'static str) -> Option<&'a str>) -> Result<Choices, LinkError> {
+    fn pick<T: Copy>(
+        key: &'static str,
+        raw: Option<&str>,
+        table: &[(T, &'static str)],
+        allowed: &'static str,
+        default: T,
+    ) -> Result<T, LinkError> {
+        raw.map_or(Ok(default), |t| {
+            tokens::value(table, t).ok_or_else(|| LinkError::BadChoice(key, t.into(), allowed))
+        })
+    }
+    fn unit<T>(
+        key: &'static str,
+        raw: Option<&str>,
+        parse: impl Fn(&str) -> Option<T>,
+        allowed: &'static str,
+        default: T,
+    ) -> Result<T, LinkError> {
+        raw.map_or(Ok(default), |t| {
+            parse(t).ok_or_else(|| LinkError::BadChoice(key, t.into(), allowed))
+        })
+    }
+    let d = Choices::default();
+    let stress_units = "Pa, kPa, MPa, GPa, psi, ksi";
+    let c = Choices {
+        source: pick(
+            "src",
+            take("src"),
+            &tokens::SOURCE,
+            "typed, section, rosette, strain",
+            d.source,
+        )?,
+        kind: pick(
+            "kind",
+            take("kind"),
+            &tokens::KIND,
+            "shaft, tube, rect, thincyl, thinsph",
+            d.kind,
+        )?,
+        length: unit(
+            "lu",
+            take("lu"),
+            LengthUnit::from_symbol,
+            "mm, m, in",
+            d.length,
+        )?,
+        force: unit(
+            "fu",
+            take("fu"),
+            ForceUnit::from_symbol,
+            "N, kN, lbf, kip",
+            d.force,
+        )?,
+        moment: unit(
+            "mu",
+            take("mu"),
+            MomentUnit::from_token,
+            "Nm, Nmm, kNm, lbfin, lbfft, kipin",
+            d.moment,
+        )?,
+        pressure: unit(
+            "pu",
+            take("pu"),
+            StressUnit::from_symbol,
+            stress_units,
+            d.pressure,
+        )?,
+        ends: pick("ends", take("ends"), &tokens::ENDS, "closed, open", d.ends)?,
+        face: pick(
+            "face",
+            take("face"),
+            &tokens::FACE,
+            "+y, +z, -y, -z",
+            d.face,
+        )?,
+        surface: pick(
+            "surf",
+            take("surf"),
+            &tokens::SURFACE,
+            "outer, inner",
+            d.surface,
+        )?,
+        layout: pick(
+            "layout",
+            take("layout"),
+            &tokens::LAYOUT,
+            "rect, delta, any",
+            d.layout,
+        )?,
+        gauges: unit(
+            "ng",
+            take("ng"),
+            |t| {
+                t.parse::<u8>()
+                    .ok()
+                    .filter(|n| (3..=MAX_GAUGES).contains(n))
+            },
+            "3 to 8",
+            d.gauges,
+        )?,
+        strain_unit: unit(
+            "su",
+            take("su"),
+            StrainUnit::from_token,
+            "ue, strain",
+            d.strain_unit,
+        )?,
+        correct: pick(
+            "tsc",
+            take("tsc"),
+            &[(true, "on"), (false, "off")],
+            "on, off",
+            d.correct,
+        )?,
+        condition: pick(
+            "cond",
+            take("cond"),
+            &tokens::CONDITION,
+            "pstress, pstrain, 3d",
+            d.condition,
+        )?,
+        modulus_unit: unit(
+            "eu",
+            take("eu"),
+            StressUnit::from_symbol,
+            stress_units,
+            d.modulus_unit,
+        )?,
+    };
+    let used = choice_pairs(&c);
+    let src = tokens::token(&tokens::SOURCE, c.source);
+    for key in CHOICE_KEYS {
+        // `src=typed` is never written but means what its absence means.
+        let explicit_typed = key == "src" && c.source == Source::Typed;
+        if take(key).is_some() && !explicit_typed && !used.iter().any(|(k, _)| *k == key) {
+            return Err(LinkError::NotUsed(key, src));
+        }
+    }
+    Ok(c)
 }
 
 #[cfg(test)]
@@ -550,6 +839,102 @@ mod tests {
         ]
     }
 
+    fn arb_choices() -> impl Strategy<Value = Choices> {
+        use crate::source::{Condition, Layout, Surface};
+        use stresscase_core::section::Face;
+        use stresscase_core::vessel::Ends;
+        (
+            (
+                0usize..4,
+                0usize..5,
+                0usize..3,
+                0usize..4,
+                0usize..6,
+                0usize..6,
+            ),
+            (any::<bool>(), 0usize..4, any::<bool>(), 0usize..3, 3u8..=8),
+            (any::<bool>(), any::<bool>(), 0usize..3, 0usize..6),
+        )
+            .prop_map(
+                |(
+                    (src, kind, lu, fu, mu, pu),
+                    (ends, face, surf, layout, ng),
+                    (su, tsc, cond, eu),
+                )| {
+                    Choices {
+                        source: tokens::SOURCE[src].0,
+                        kind: tokens::KIND[kind].0,
+                        length: LengthUnit::ALL[lu],
+                        force: ForceUnit::ALL[fu],
+                        moment: MomentUnit::ALL[mu],
+                        pressure: StressUnit::ALL[pu],
+                        ends: if ends { Ends::Closed } else { Ends::Open },
+                        face: [Face::PosY, Face::PosZ, Face::NegY, Face::NegZ][face],
+                        surface: if surf { Surface::Inner } else { Surface::Outer },
+                        layout: [Layout::Rectangular, Layout::Delta, Layout::Custom][layout],
+                        gauges: ng,
+                        strain_unit: if su {
+                            StrainUnit::Micro
+                        } else {
+                            StrainUnit::Unit
+                        },
+                        correct: tsc,
+                        condition: [
+                            Condition::PlaneStress,
+                            Condition::PlaneStrain,
+                            Condition::Full,
+                        ][cond],
+                        modulus_unit: StressUnit::ALL[eu],
+                    }
+                },
+            )
+            .prop_map(|mut c| {
+                // Choices a path does not use are not kept in a link: normalise them away.
+                let d = Choices::default();
+                let used: Vec<&str> = choice_pairs(&c).into_iter().map(|(k, _)| k).collect();
+                if !used.contains(&"kind") {
+                    c.kind = d.kind;
+                }
+                if !used.contains(&"lu") {
+                    c.length = d.length;
+                }
+                if !used.contains(&"fu") {
+                    c.force = d.force;
+                }
+                if !used.contains(&"mu") {
+                    c.moment = d.moment;
+                }
+                if !used.contains(&"pu") {
+                    c.pressure = d.pressure;
+                }
+                if !used.contains(&"ends") {
+                    c.ends = d.ends;
+                }
+                if !used.contains(&"face") {
+                    c.face = d.face;
+                }
+                if !used.contains(&"surf") {
+                    c.surface = d.surface;
+                }
+                if !used.contains(&"layout") {
+                    c.layout = d.layout;
+                }
+                if !used.contains(&"ng") {
+                    c.gauges = d.gauges;
+                }
+                if !used.contains(&"su") {
+                    c.strain_unit = d.strain_unit;
+                }
+                if !used.contains(&"tsc") {
+                    c.correct = d.correct;
+                }
+                if !used.contains(&"cond") {
+                    c.condition = d.condition;
+                }
+                c
+            })
+    }
+
     fn arb_case() -> impl Strategy<Value = Case> {
         (
             (
@@ -565,19 +950,34 @@ mod tests {
                 prop::array::uniform3(arb_num()),
                 any::<bool>(),
             ),
+            (arb_choices(), prop::collection::vec(arb_num(), 40)),
         )
             .prop_filter_map(
                 "non-zero normal",
-                |((title, note, full, u), mut stress, (angle, rad, normal, up))| {
+                |(
+                    (title, note, full, u),
+                    mut stress,
+                    (angle, rad, normal, up),
+                    (choices, nums),
+                )| {
                     if normal == [0.0; 3] {
                         return None;
                     }
-                    let mode = if full { Mode::Full } else { Mode::Plane };
+                    let typed = choices.source == Source::Typed;
+                    let mode = if full && typed {
+                        Mode::Full
+                    } else {
+                        Mode::Plane
+                    };
                     if mode == Mode::Plane {
                         stress[2] = 0.0;
                         stress[4] = 0.0;
                         stress[5] = 0.0;
                     }
+                    if !typed {
+                        stress = [0.0; 6];
+                    }
+                    let numbers = choices.active().into_iter().zip(nums).collect();
                     Some(Case {
                         title,
                         note,
@@ -596,6 +996,8 @@ mod tests {
                         } else {
                             ShearAxis::PositiveDown
                         },
+                        choices,
+                        numbers,
                     })
                 },
             )

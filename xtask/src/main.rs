@@ -285,6 +285,8 @@ fn test() -> Result {
             "page_in_browser",
             "--test",
             "page_offline_and_links",
+            "--test",
+            "page_sources",
             "--",
             "--ignored",
             "--test-threads=2",

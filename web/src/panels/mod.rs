@@ -2,12 +2,20 @@
 
 pub mod case_shelf;
 pub mod caution;
+pub mod choice_select;
+pub mod elastic_entry;
 pub mod element_turn;
 pub mod link_notice;
 pub mod mohr_diagram;
 pub mod number_field;
 pub mod plane_probe;
 pub mod results;
+pub mod rosette_entry;
+pub mod scan_plot;
+pub mod section_loads;
+pub mod source_pick;
 pub mod stale_notice;
+pub mod strain_circle;
+pub mod strain_entry;
 pub mod stress_element;
 pub mod stress_entry;

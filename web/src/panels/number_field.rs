@@ -1,26 +1,35 @@
-//! One labelled number input that validates as you type and says what is wrong.
+//! One labelled number input that validates as you type and says what is wrong — both a number
+//! that does not read and a value core refuses (e.g. a bore larger than the outside).
 
-use crate::case::{CaseForm, Field};
+use crate::case::{CaseForm, Evaluation, Field, FieldProblem};
 use leptos::prelude::*;
 
-/// The unit text beside a field.
-fn unit_of(form: &CaseForm, field: Field) -> String {
-    match field {
-        Field::Angle => form.angle_unit.symbol().into(),
-        Field::Nx | Field::Ny | Field::Nz => String::new(),
-        _ => form.unit.symbol().into(),
-    }
-}
+/// The evaluation result the page shares with its fields, so each field can show core's reason
+/// for refusing its value.
+pub type SharedResult = Memo<Result<Evaluation, Vec<FieldProblem>>>;
 
 /// A text input bound to one field of the case.
 #[component]
 pub fn NumberField(form: RwSignal<CaseForm>, field: Field) -> impl IntoView {
-    let problem = Memo::new(move |_| form.with(|f| f.problem(field)));
+    let shared = use_context::<SharedResult>();
+    let problem = Memo::new(move |_| {
+        form.with(|f| f.problem(field)).or_else(|| {
+            shared.and_then(|r| {
+                r.with(|r| {
+                    r.as_ref().err().and_then(|ps| {
+                        ps.iter()
+                            .find(|p| p.field == field)
+                            .map(|p| p.message.clone())
+                    })
+                })
+            })
+        })
+    });
     let active = Memo::new(move |_| form.with(|f| f.is_active(field)));
     let msg_id = format!("{}-msg", field.id());
     view! {
         <div class="field" class:invalid=move || problem.with(Option::is_some) class:inactive=move || !active.get()>
-            <label for=field.id()>{field.label()}</label>
+            <label for=field.id()>{move || form.with(|f| f.label(field))}</label>
             <input
                 type="text"
                 inputmode="decimal"
@@ -33,8 +42,26 @@ pub fn NumberField(form: RwSignal<CaseForm>, field: Field) -> impl IntoView {
                 prop:value=move || form.with(|f| f.text(field).to_string())
                 on:input:target=move |ev| form.update(|f| f.set_text(field, ev.target().value()))
             />
-            <span class="unit">{move || form.with(|f| unit_of(f, field))}</span>
+            <span class="unit">{move || form.with(|f| f.unit_of(field))}</span>
             <span class="field-msg" id=msg_id>{move || problem.get().unwrap_or_default()}</span>
+        </div>
+    }
+}
+
+/// The fields among `nums` that the case's current path uses, re-drawn only when that set
+/// changes (so typing never rebuilds an input under the cursor).
+#[component]
+pub fn SourceFields(form: RwSignal<CaseForm>, nums: Vec<crate::source::Num>) -> impl IntoView {
+    let shown = Memo::new(move |_| {
+        let active = form.with(|f| f.choices.active());
+        nums.iter()
+            .copied()
+            .filter(|n| active.contains(n))
+            .collect::<Vec<_>>()
+    });
+    view! {
+        <div class="component-grid">
+            {move || shown.get().into_iter().map(|n| view! { <NumberField form=form field=Field::Src(n)/> }).collect_view()}
         </div>
     }
 }

@@ -1,18 +1,21 @@
 //! The banner shown while an input is invalid: what is wrong, and that the pictures are stale.
 
-use crate::case::{Evaluation, FieldProblem};
+use crate::case::{CaseForm, Evaluation, FieldProblem};
 use leptos::prelude::*;
 
 /// Lists the invalid fields; empty when everything reads.
 #[component]
-pub fn StaleNotice(result: Memo<Result<Evaluation, Vec<FieldProblem>>>) -> impl IntoView {
+pub fn StaleNotice(
+    form: RwSignal<CaseForm>,
+    result: Memo<Result<Evaluation, Vec<FieldProblem>>>,
+) -> impl IntoView {
     move || {
         result.with(|r| match r {
             Ok(_) => ().into_any(),
             Err(problems) => {
                 let items = problems
                     .iter()
-                    .map(|p| view! { <li>{format!("{}: {}", p.field.label(), p.message)}</li> })
+                    .map(|p| view! { <li>{format!("{}: {}", form.with_untracked(|f| f.label(p.field)), p.message)}</li> })
                     .collect_view();
                 view! {
                     <div class="stale-notice" id="stale-notice" role="status">

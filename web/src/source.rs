@@ -1,0 +1,1147 @@
+//! Where the stress comes from: typed components, loads on a section, a strain-gauge rosette, or
+//! strains through Hooke's law. The choices and number fields of each path, their defaults (an
+//! invented demo scenario), and the call into core that turns them into a stress tensor.
+//! No formula here: every number comes from `stresscase-core`.
+
+use stresscase_core::hooke::{Elastic, ElasticError, Strain};
+use stresscase_core::rosette::{self, Gauge, RosetteError, RosetteStrain, Transverse};
+use stresscase_core::section::{
+    Concentration, Face, Loads, Location, Path, Pressure, Properties, Rectangle, Round, Scan,
+    Section, SectionError, SAINT_VENANT,
+};
+use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
+use stresscase_core::vessel::{self, Ends, VesselError};
+use stresscase_core::{AngleUnit, StressTensor, StressUnit};
+
+/// Where the stress tensor comes from.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Source {
+    /// The six components typed in.
+    #[default]
+    Typed,
+    /// Loads on a section (or a pressure vessel).
+    Section,
+    /// Strain-gauge rosette readings.
+    Rosette,
+    /// A strain state, through Hooke's law.
+    Strain,
+}
+
+/// The section kinds the page offers.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum SectionKind {
+    /// Solid round shaft.
+    #[default]
+    SolidRound,
+    /// Tube, thick or thin (Lamé for pressure).
+    Tube,
+    /// Solid rectangle.
+    Rectangle,
+    /// Thin-walled cylinder under internal pressure.
+    ThinCylinder,
+    /// Thin-walled sphere under internal pressure.
+    ThinSphere,
+}
+
+/// Which surface of a thin vessel.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Surface {
+    /// Outside (σr = 0).
+    #[default]
+    Outer,
+    /// Inside (σr = −p).
+    Inner,
+}
+
+/// Rosette gauge layout.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Layout {
+    /// 0°, 45°, 90°.
+    #[default]
+    Rectangular,
+    /// 0°, 60°, 120°.
+    Delta,
+    /// Angles typed by the user, 3 to 8 gauges.
+    Custom,
+}
+
+/// The condition Hooke's law is applied under.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Condition {
+    /// Plane stress: εx, εy, γxy given; σz = 0.
+    #[default]
+    PlaneStress,
+    /// Plane strain: εz = γyz = γzx = 0.
+    PlaneStrain,
+    /// All six strains given.
+    Full,
+}
+
+/// Most gauges a rosette may have on the page.
+pub const MAX_GAUGES: u8 = 8;
+
+/// Every choice (as opposed to a typed number) of the source paths.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub struct Choices {
+    /// The path.
+    pub source: Source,
+    /// Section kind.
+    pub kind: SectionKind,
+    /// Length unit of section dimensions and positions.
+    pub length: LengthUnit,
+    /// Force unit.
+    pub force: ForceUnit,
+    /// Moment unit.
+    pub moment: MomentUnit,
+    /// Pressure unit.
+    pub pressure: StressUnit,
+    /// Closed or open ends (pressure end load).
+    pub ends: Ends,
+    /// Rectangle face of the point.
+    pub face: Face,
+    /// Thin-vessel surface of the point.
+    pub surface: Surface,
+    /// Rosette layout.
+    pub layout: Layout,
+    /// Gauges in a custom rosette (3..=8).
+    pub gauges: u8,
+    /// Unit of gauge readings and strains.
+    pub strain_unit: StrainUnit,
+    /// Apply the transverse-sensitivity correction.
+    pub correct: bool,
+    /// Hooke's-law condition for the strain path.
+    pub condition: Condition,
+    /// Unit of Young's modulus.
+    pub modulus_unit: StressUnit,
+}
+
+impl Default for Choices {
+    fn default() -> Self {
+        Self {
+            source: Source::Typed,
+            kind: SectionKind::SolidRound,
+            length: LengthUnit::Mm,
+            force: ForceUnit::KN,
+            moment: MomentUnit::Nm,
+            pressure: StressUnit::MPa,
+            ends: Ends::Closed,
+            face: Face::PosY,
+            surface: Surface::Inner,
+            layout: Layout::Rectangular,
+            gauges: 4,
+            strain_unit: StrainUnit::Micro,
+            correct: false,
+            condition: Condition::PlaneStress,
+            modulus_unit: StressUnit::GPa,
+        }
+    }
+}
+
+/// A typed number of a source path.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, PartialOrd, Ord)]
+pub enum Num {
+    /// Diameter (solid), outer diameter (tube) or mean diameter (thin vessel).
+    D,
+    /// Inner diameter of a tube.
+    Di,
+    /// Rectangle depth along y.
+    H,
+    /// Rectangle width along z.
+    B,
+    /// Thin-vessel wall thickness.
+    Wall,
+    /// Axial force.
+    N,
+    /// Bending moment about y.
+    My,
+    /// Bending moment about z.
+    Mz,
+    /// Torque.
+    T,
+    /// Shear force along y.
+    Vy,
+    /// Shear force along z.
+    Vz,
+    /// Internal pressure.
+    Pin,
+    /// External pressure.
+    Pout,
+    /// Normal-stress concentration factor.
+    Kt,
+    /// Shear-stress concentration factor.
+    Kts,
+    /// Point angle φ on a round section.
+    Phi,
+    /// Point radius on a tube.
+    R,
+    /// Point coordinate along a rectangle face.
+    Along,
+    /// Gauge direction (0-based index).
+    GaugeAngle(u8),
+    /// Gauge reading (0-based index).
+    GaugeReading(u8),
+    /// Transverse-sensitivity coefficient Kt of the gauges, in percent.
+    GaugeKt,
+    /// Poisson's ratio of the gauge-factor calibration beam.
+    GaugeNu0,
+    /// εx.
+    Ex,
+    /// εy.
+    Ey,
+    /// εz.
+    Ez,
+    /// γxy.
+    Gxy,
+    /// γyz.
+    Gyz,
+    /// γzx.
+    Gzx,
+    /// Young's modulus.
+    E,
+    /// Poisson's ratio.
+    Nu,
+    /// Coefficient of thermal expansion, µε/K.
+    Alpha,
+    /// Temperature change, K.
+    DeltaT,
+}
+
+/// What a number measures (its unit comes from the choices).
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Quantity {
+    /// Length unit.
+    Length,
+    /// Force unit.
+    Force,
+    /// Moment unit.
+    Moment,
+    /// Pressure unit.
+    Pressure,
+    /// Dimensionless ratio.
+    Ratio,
+    /// Percent.
+    Percent,
+    /// Angle unit of the case.
+    Angle,
+    /// Strain unit.
+    Strain,
+    /// Modulus unit.
+    Modulus,
+    /// µε/K.
+    Expansion,
+    /// K.
+    Temperature,
+}
+
+const GAUGE_KEYS_A: [&str; 8] = ["a1", "a2", "a3", "a4", "a5", "a6", "a7", "a8"];
+const GAUGE_KEYS_E: [&str; 8] = ["e1", "e2", "e3", "e4", "e5", "e6", "e7", "e8"];
+const GAUGE_IDS_A: [&str; 8] = [
+    "in-ga1", "in-ga2", "in-ga3", "in-ga4", "in-ga5", "in-ga6", "in-ga7", "in-ga8",
+];
+const GAUGE_IDS_E: [&str; 8] = [
+    "in-ge1", "in-ge2", "in-ge3", "in-ge4", "in-ge5", "in-ge6", "in-ge7", "in-ge8",
+];
+
+impl Num {
+    /// Every number, in link order.
+    #[must_use]
+    pub fn all() -> Vec<Num> {
+        let mut v = vec![
+            Num::D,
+            Num::Di,
+            Num::H,
+            Num::B,
+            Num::Wall,
+            Num::N,
+            Num::My,
+            Num::Mz,
+            Num::T,
+            Num::Vy,
+            Num::Vz,
+            Num::Pin,
+            Num::Pout,
+            Num::Kt,
+            Num::Kts,
+            Num::Phi,
+            Num::R,
+            Num::Along,
+        ];
+        for i in 0..MAX_GAUGES {
+            v.push(Num::GaugeAngle(i));
+            v.push(Num::GaugeReading(i));
+        }
+        v.extend([
+            Num::GaugeKt,
+            Num::GaugeNu0,
+            Num::Ex,
+            Num::Ey,
+            Num::Ez,
+            Num::Gxy,
+            Num::Gyz,
+            Num::Gzx,
+            Num::E,
+            Num::Nu,
+            Num::Alpha,
+            Num::DeltaT,
+        ]);
+        v
+    }
+
+    /// The key in a case link.
+    #[must_use]
+    pub fn key(self) -> &'static str {
+        match self {
+            Num::D => "d",
+            Num::Di => "di",
+            Num::H => "h",
+            Num::B => "b",
+            Num::Wall => "wall",
+            Num::N => "N",
+            Num::My => "My",
+            Num::Mz => "Mz",
+            Num::T => "T",
+            Num::Vy => "Vy",
+            Num::Vz => "Vz",
+            Num::Pin => "pin",
+            Num::Pout => "pout",
+            Num::Kt => "kt",
+            Num::Kts => "kts",
+            Num::Phi => "phi",
+            Num::R => "r",
+            Num::Along => "at",
+            Num::GaugeAngle(i) => GAUGE_KEYS_A[usize::from(i.min(7))],
+            Num::GaugeReading(i) => GAUGE_KEYS_E[usize::from(i.min(7))],
+            Num::GaugeKt => "gkt",
+            Num::GaugeNu0 => "gnu0",
+            Num::Ex => "ex",
+            Num::Ey => "ey",
+            Num::Ez => "ez",
+            Num::Gxy => "gxy",
+            Num::Gyz => "gyz",
+            Num::Gzx => "gzx",
+            Num::E => "E",
+            Num::Nu => "nu",
+            Num::Alpha => "alpha",
+            Num::DeltaT => "dT",
+        }
+    }
+
+    /// A stable element id for the page and its tests.
+    #[must_use]
+    pub fn id(self) -> &'static str {
+        match self {
+            Num::GaugeAngle(i) => GAUGE_IDS_A[usize::from(i.min(7))],
+            Num::GaugeReading(i) => GAUGE_IDS_E[usize::from(i.min(7))],
+            Num::D => "in-d",
+            Num::Di => "in-di",
+            Num::H => "in-h",
+            Num::B => "in-b",
+            Num::Wall => "in-wall",
+            Num::N => "in-load-n",
+            Num::My => "in-load-my",
+            Num::Mz => "in-load-mz",
+            Num::T => "in-load-t",
+            Num::Vy => "in-load-vy",
+            Num::Vz => "in-load-vz",
+            Num::Pin => "in-pin",
+            Num::Pout => "in-pout",
+            Num::Kt => "in-kt",
+            Num::Kts => "in-kts",
+            Num::Phi => "in-phi",
+            Num::R => "in-r",
+            Num::Along => "in-along",
+            Num::GaugeKt => "in-gkt",
+            Num::GaugeNu0 => "in-gnu0",
+            Num::Ex => "in-ex",
+            Num::Ey => "in-ey",
+            Num::Ez => "in-ez",
+            Num::Gxy => "in-gxy",
+            Num::Gyz => "in-gyz",
+            Num::Gzx => "in-gzx",
+            Num::E => "in-e",
+            Num::Nu => "in-nu",
+            Num::Alpha => "in-alpha",
+            Num::DeltaT => "in-dt",
+        }
+    }
+
+    /// The label beside the field, for the given choices.
+    #[must_use]
+    pub fn label(self, c: &Choices) -> String {
+        let thin = matches!(c.kind, SectionKind::ThinCylinder | SectionKind::ThinSphere);
+        match self {
+            Num::D if thin => "mean diameter Dm".into(),
+            Num::D if c.kind == SectionKind::Tube => "outer diameter D".into(),
+            Num::D => "diameter d".into(),
+            Num::Di => "inner diameter Di".into(),
+            Num::H => "depth h (along y)".into(),
+            Num::B => "width b (along z)".into(),
+            Num::Wall => "wall thickness t".into(),
+            Num::N => "axial force N".into(),
+            Num::My => "bending moment My".into(),
+            Num::Mz => "bending moment Mz".into(),
+            Num::T => "torque T".into(),
+            Num::Vy => "shear force Vy".into(),
+            Num::Vz => "shear force Vz".into(),
+            Num::Pin if thin => "internal pressure p".into(),
+            Num::Pin => "internal pressure pi".into(),
+            Num::Pout => "external pressure po".into(),
+            Num::Kt => "Kt (normal)".into(),
+            Num::Kts => "Kts (shear)".into(),
+            Num::Phi => "point angle φ".into(),
+            Num::R => "point radius r".into(),
+            Num::Along => match c.face {
+                Face::PosY | Face::NegY => "point z on the face".into(),
+                Face::PosZ | Face::NegZ => "point y on the face".into(),
+            },
+            Num::GaugeAngle(i) => format!("gauge {} angle", i + 1),
+            Num::GaugeReading(i) => format!("gauge {} reading", i + 1),
+            Num::GaugeKt => "transverse sensitivity Kt".into(),
+            Num::GaugeNu0 => "ν0 of the calibration beam".into(),
+            Num::Ex => "εx".into(),
+            Num::Ey => "εy".into(),
+            Num::Ez => "εz".into(),
+            Num::Gxy => "γxy".into(),
+            Num::Gyz => "γyz".into(),
+            Num::Gzx => "γzx".into(),
+            Num::E => "Young's modulus E".into(),
+            Num::Nu => "Poisson's ratio ν".into(),
+            Num::Alpha => "expansion coefficient α".into(),
+            Num::DeltaT => "temperature change ΔT".into(),
+        }
+    }
+
+    /// What the number measures.
+    #[must_use]
+    pub fn quantity(self) -> Quantity {
+        match self {
+            Num::D | Num::Di | Num::H | Num::B | Num::Wall | Num::R | Num::Along => {
+                Quantity::Length
+            }
+            Num::N | Num::Vy | Num::Vz => Quantity::Force,
+            Num::My | Num::Mz | Num::T => Quantity::Moment,
+            Num::Pin | Num::Pout => Quantity::Pressure,
+            Num::Kt | Num::Kts | Num::Nu | Num::GaugeNu0 => Quantity::Ratio,
+            Num::GaugeKt => Quantity::Percent,
+            Num::Phi | Num::GaugeAngle(_) => Quantity::Angle,
+            Num::GaugeReading(_) | Num::Ex | Num::Ey | Num::Ez | Num::Gxy | Num::Gyz | Num::Gzx => {
+                Quantity::Strain
+            }
+            Num::E => Quantity::Modulus,
+            Num::Alpha => Quantity::Expansion,
+            Num::DeltaT => Quantity::Temperature,
+        }
+    }
+
+    /// The unit text beside the field.
+    #[must_use]
+    pub fn unit(self, c: &Choices, angle: AngleUnit) -> &'static str {
+        match self.quantity() {
+            Quantity::Length => c.length.symbol(),
+            Quantity::Force => c.force.symbol(),
+            Quantity::Moment => c.moment.symbol(),
+            Quantity::Pressure => c.pressure.symbol(),
+            Quantity::Ratio => "(ratio)",
+            Quantity::Percent => "%",
+            Quantity::Angle => angle.symbol(),
+            Quantity::Strain => c.strain_unit.symbol(),
+            Quantity::Modulus => c.modulus_unit.symbol(),
+            Quantity::Expansion => "µε/K",
+            Quantity::Temperature => "K",
+        }
+    }
+
+    /// The demo value (an invented scenario: a 40 mm shaft of a conveyor drive, a hydraulic
+    /// tube, a rosette on a press frame), in the default units.
+    #[must_use]
+    pub fn demo_text(self) -> &'static str {
+        match self {
+            Num::D => "40",
+            Num::Di => "28",
+            Num::H => "60",
+            Num::B => "25",
+            Num::Wall => "4",
+            Num::N => "12",
+            Num::My => "0",
+            Num::Mz => "380",
+            Num::T => "520",
+            Num::Vy => "4.5",
+            Num::Vz => "0",
+            Num::Pin => "18",
+            Num::Pout => "0",
+            Num::Kt | Num::Kts => "1",
+            Num::Phi => "180",
+            Num::R => "20",
+            Num::Along => "0",
+            Num::GaugeAngle(i) => {
+                ["0", "45", "90", "135", "30", "60", "120", "150"][usize::from(i.min(7))]
+            }
+            Num::GaugeReading(i) => {
+                ["640", "215", "-180", "250", "420", "310", "-90", "120"][usize::from(i.min(7))]
+            }
+            Num::GaugeKt => "1.2",
+            Num::GaugeNu0 => "0.285",
+            Num::Ex => "520",
+            Num::Ey => "-160",
+            Num::Ez => "0",
+            Num::Gxy => "300",
+            Num::Gyz => "0",
+            Num::Gzx => "0",
+            Num::E => "200",
+            Num::Nu => "0.3",
+            Num::Alpha => "12",
+            Num::DeltaT => "0",
+        }
+    }
+}
+
+/// The elastic constants every case carries.
+pub const ELASTIC: [Num; 4] = [Num::E, Num::Nu, Num::Alpha, Num::DeltaT];
+
+impl Choices {
+    /// The numbers this set of choices uses, in the order they are shown.
+    #[must_use]
+    pub fn active(&self) -> Vec<Num> {
+        let mut v = match self.source {
+            Source::Typed => vec![],
+            Source::Section => self.section_numbers(),
+            Source::Rosette => self.rosette_numbers(),
+            Source::Strain => match self.condition {
+                Condition::Full => vec![Num::Ex, Num::Ey, Num::Ez, Num::Gxy, Num::Gyz, Num::Gzx],
+                _ => vec![Num::Ex, Num::Ey, Num::Gxy],
+            },
+        };
+        v.extend(ELASTIC);
+        v
+    }
+
+    fn section_numbers(&self) -> Vec<Num> {
+        let loads = [Num::N, Num::My, Num::Mz, Num::T, Num::Vy, Num::Vz];
+        let k = [Num::Kt, Num::Kts];
+        match self.kind {
+            SectionKind::SolidRound => {
+                [&[Num::D][..], &loads, &[Num::Pout], &k, &[Num::Phi]].concat()
+            }
+            SectionKind::Tube => [
+                &[Num::D, Num::Di][..],
+                &loads,
+                &[Num::Pin, Num::Pout],
+                &k,
+                &[Num::Phi, Num::R],
+            ]
+            .concat(),
+            SectionKind::Rectangle => [&[Num::H, Num::B][..], &loads, &k, &[Num::Along]].concat(),
+            SectionKind::ThinCylinder | SectionKind::ThinSphere => {
+                vec![Num::D, Num::Wall, Num::Pin]
+            }
+        }
+    }
+
+    /// Gauges in use.
+    #[must_use]
+    pub fn gauge_count(&self) -> u8 {
+        match self.layout {
+            Layout::Rectangular | Layout::Delta => 3,
+            Layout::Custom => self.gauges.clamp(3, MAX_GAUGES),
+        }
+    }
+
+    fn rosette_numbers(&self) -> Vec<Num> {
+        let mut v = Vec::new();
+        for i in 0..self.gauge_count() {
+            if self.layout == Layout::Custom {
+                v.push(Num::GaugeAngle(i));
+            }
+            v.push(Num::GaugeReading(i));
+        }
+        if self.correct {
+            v.extend([Num::GaugeKt, Num::GaugeNu0]);
+        }
+        v
+    }
+
+    /// Whether the section takes force and moment loads (not the thin vessels).
+    #[must_use]
+    pub fn has_loads(&self) -> bool {
+        !matches!(
+            self.kind,
+            SectionKind::ThinCylinder | SectionKind::ThinSphere
+        )
+    }
+}
+
+/// Token tables for the choices, shared by the link writer and reader and the page's selects.
+pub mod tokens {
+    use super::{Condition, Layout, SectionKind, Source, Surface};
+    use stresscase_core::section::Face;
+    use stresscase_core::vessel::Ends;
+
+    /// `src`.
+    pub const SOURCE: [(Source, &str); 4] = [
+        (Source::Typed, "typed"),
+        (Source::Section, "section"),
+        (Source::Rosette, "rosette"),
+        (Source::Strain, "strain"),
+    ];
+    /// `kind`.
+    pub const KIND: [(SectionKind, &str); 5] = [
+        (SectionKind::SolidRound, "shaft"),
+        (SectionKind::Tube, "tube"),
+        (SectionKind::Rectangle, "rect"),
+        (SectionKind::ThinCylinder, "thincyl"),
+        (SectionKind::ThinSphere, "thinsph"),
+    ];
+    /// `ends`.
+    pub const ENDS: [(Ends, &str); 2] = [(Ends::Closed, "closed"), (Ends::Open, "open")];
+    /// `face`.
+    pub const FACE: [(Face, &str); 4] = [
+        (Face::PosY, "+y"),
+        (Face::PosZ, "+z"),
+        (Face::NegY, "-y"),
+        (Face::NegZ, "-z"),
+    ];
+    /// `surf`.
+    pub const SURFACE: [(Surface, &str); 2] =
+        [(Surface::Outer, "outer"), (Surface::Inner, "inner")];
+    /// `layout`.
+    pub const LAYOUT: [(Layout, &str); 3] = [
+        (Layout::Rectangular, "rect"),
+        (Layout::Delta, "delta"),
+        (Layout::Custom, "any"),
+    ];
+    /// `cond`.
+    pub const CONDITION: [(Condition, &str); 3] = [
+        (Condition::PlaneStress, "pstress"),
+        (Condition::PlaneStrain, "pstrain"),
+        (Condition::Full, "3d"),
+    ];
+
+    /// The token of `v` in `table`.
+    #[must_use]
+    pub fn token<T: PartialEq + Copy>(table: &[(T, &'static str)], v: T) -> &'static str {
+        table.iter().find(|(x, _)| *x == v).map_or("", |(_, t)| t)
+    }
+
+    /// The value of token `t` in `table`.
+    #[must_use]
+    pub fn value<T: Copy>(table: &[(T, &'static str)], t: &str) -> Option<T> {
+        table.iter().find(|(_, s)| *s == t).map(|(x, _)| *x)
+    }
+}
+
+/// The numbers a source reads, looked up by [`Num`]; absent numbers read as 0.
+pub trait Numbers {
+    /// The value of `n`.
+    fn get(&self, n: Num) -> f64;
+}
+
+/// A problem with one source number.
+#[derive(Debug, Clone, PartialEq)]
+pub struct SourceProblem {
+    /// The number it belongs to.
+    pub num: Num,
+    /// Why.
+    pub message: String,
+}
+
+fn problem(num: Num, message: impl Into<String>) -> SourceProblem {
+    SourceProblem {
+        num,
+        message: message.into(),
+    }
+}
+
+/// What a section path computed besides the tensor.
+#[derive(Debug, Clone, PartialEq)]
+pub struct SectionOutcome {
+    /// Section properties in SI (m², m⁴); None for thin vessels.
+    pub properties: Option<Properties>,
+    /// The scan with stresses in the case's unit and positions in radians (round) or the length
+    /// unit (rectangle); None for thin vessels.
+    pub scan: Option<Scan>,
+    /// von Mises at the outer and inner surface of a thin vessel, case unit.
+    pub vessel_surfaces: Option<[f64; 2]>,
+    /// Warnings to show (each says whether it is common practice).
+    pub warnings: Vec<&'static str>,
+}
+
+/// What a rosette path computed besides the tensor.
+#[derive(Debug, Clone, PartialEq)]
+pub struct RosetteOutcome {
+    /// The gauges as used (angles in radians, readings as strain).
+    pub gauges: Vec<Gauge>,
+    /// The reduced strain state (dimensionless).
+    pub strain: RosetteStrain,
+}
+
+/// What a strain path computed besides the tensor.
+#[derive(Debug, Clone, PartialEq)]
+pub struct StrainOutcome {
+    /// The full strain state used (εz from plane stress included), dimensionless.
+    pub strain: Strain,
+}
+
+/// The extra results of a source path.
+#[derive(Debug, Clone, PartialEq)]
+pub enum Outcome {
+    /// Loads on a section.
+    Section(SectionOutcome),
+    /// Rosette readings.
+    Rosette(RosetteOutcome),
+    /// Strains through Hooke's law.
+    Strain(StrainOutcome),
+}
+
+/// The elastic constants as core types: the material (E in Pa) and α·ΔT.
+///
+/// # Errors
+/// The refused constant, attached to its field.
+pub fn elastic(c: &Choices, n: &impl Numbers) -> Result<(Elastic, f64), SourceProblem> {
+    let e = n.get(Num::E) * c.modulus_unit.pascals();
+    let m = Elastic::try_new(e, n.get(Num::Nu)).map_err(|err| match err {
+        ElasticError::Modulus(_) => problem(Num::E, "E must be a positive number"),
+        ElasticError::Poisson(_) => problem(Num::Nu, err.to_string()),
+    })?;
+    Ok((m, n.get(Num::Alpha) * 1e-6 * n.get(Num::DeltaT)))
+}
+
+fn section_problem(e: SectionError, c: &Choices) -> SourceProblem {
+    let num = match e {
+        SectionError::Dimension("outer diameter" | "diameter") => Num::D,
+        SectionError::Dimension("inner diameter") | SectionError::InnerNotSmaller => Num::Di,
+        SectionError::Dimension("depth h") => Num::H,
+        SectionError::Dimension(_) => Num::B,
+        SectionError::Load("Kt") => Num::Kt,
+        SectionError::Load("Kts") => Num::Kts,
+        SectionError::Load("internal pressure") | SectionError::NoBore => Num::Pin,
+        SectionError::Load("external pressure") | SectionError::PressureNotAllowed => Num::Pout,
+        SectionError::Load("φ") => Num::Phi,
+        SectionError::Load(_) => Num::N,
+        SectionError::OffSection("r") if c.kind == SectionKind::Tube => Num::R,
+        SectionError::OffSection(_) if c.kind == SectionKind::Rectangle => Num::Along,
+        SectionError::OffSection(_) => Num::Phi,
+    };
+    problem(num, e.to_string())
+}
+
+fn vessel_problem(e: VesselError) -> SourceProblem {
+    let num = match e {
+        VesselError::Dimension("radius") => Num::D,
+        VesselError::Pressure(_) => Num::Pin,
+        _ => Num::Wall,
+    };
+    let message = match e {
+        VesselError::Dimension("radius") => "the mean diameter must be a positive number".into(),
+        other => other.to_string(),
+    };
+    problem(num, message)
+}
+
+/// Points sampled on each scan path.
+pub const SCAN_SAMPLES: usize = 72;
+
+/// Converts every stress of a scan from pascals to `unit` and rectangle positions from metres to
+/// the length unit (round positions stay in radians).
+fn scan_in_units(mut scan: Scan, unit: StressUnit, length: LengthUnit) -> Scan {
+    let k = 1.0 / unit.pascals();
+    let l = 1.0 / length.metres();
+    for curve in &mut scan.curves {
+        let pos = if curve.path == Path::Perimeter {
+            l
+        } else {
+            1.0
+        };
+        for s in &mut curve.samples {
+            s.von_mises *= k;
+            s.sigma1 *= k;
+            s.position *= pos;
+        }
+    }
+    for c in [&mut scan.max_von_mises, &mut scan.max_principal] {
+        c.value *= k;
+        c.at = location_in(c.at, l);
+        if matches!(c.at, Location::Rectangle { .. }) {
+            c.position *= l;
+        }
+    }
+    scan
+}
+
+/// A location with its lengths multiplied by `l`.
+#[must_use]
+pub fn location_in(at: Location, l: f64) -> Location {
+    match at {
+        Location::Round { phi, r } => Location::Round { phi, r: r * l },
+        Location::Rectangle { face, along } => Location::Rectangle {
+            face,
+            along: along * l,
+        },
+    }
+}
+
+/// The section the choices and numbers describe, in metres.
+///
+/// # Errors
+/// The refused dimension.
+pub fn section(c: &Choices, n: &impl Numbers) -> Result<Section, SourceProblem> {
+    let m = c.length.metres();
+    let s = match c.kind {
+        SectionKind::SolidRound => Round::solid(n.get(Num::D) * m).map(Section::Round),
+        SectionKind::Tube => Round::tube(n.get(Num::D) * m, n.get(Num::Di) * m).map(Section::Round),
+        SectionKind::Rectangle => {
+            Rectangle::new(n.get(Num::H) * m, n.get(Num::B) * m).map(Section::Rectangle)
+        }
+        SectionKind::ThinCylinder | SectionKind::ThinSphere => {
+            return Err(problem(Num::D, "thin vessels have no section"))
+        }
+    };
+    s.map_err(|e| section_problem(e, c))
+}
+
+/// Loads, pressure and factors in SI.
+fn section_loads(c: &Choices, n: &impl Numbers) -> (Loads, Pressure, Concentration) {
+    let f = c.force.newtons();
+    let mm = c.moment.newton_metres();
+    let p = c.pressure.pascals();
+    let loads = Loads {
+        n: n.get(Num::N) * f,
+        my: n.get(Num::My) * mm,
+        mz: n.get(Num::Mz) * mm,
+        t: n.get(Num::T) * mm,
+        vy: n.get(Num::Vy) * f,
+        vz: n.get(Num::Vz) * f,
+    };
+    let pressure = match c.kind {
+        SectionKind::SolidRound => Pressure {
+            inner: 0.0,
+            outer: n.get(Num::Pout) * p,
+            ends: c.ends,
+        },
+        SectionKind::Tube => Pressure {
+            inner: n.get(Num::Pin) * p,
+            outer: n.get(Num::Pout) * p,
+            ends: c.ends,
+        },
+        _ => Pressure::NONE,
+    };
+    let k = Concentration {
+        normal: n.get(Num::Kt),
+        shear: n.get(Num::Kts),
+    };
+    (loads, pressure, k)
+}
+
+/// The location of the chosen point, in metres and radians.
+fn point(c: &Choices, n: &impl Numbers, angle: AngleUnit) -> Location {
+    let m = c.length.metres();
+    match c.kind {
+        SectionKind::Rectangle => Location::Rectangle {
+            face: c.face,
+            along: n.get(Num::Along) * m,
+        },
+        SectionKind::Tube => Location::Round {
+            phi: angle.to_radians(n.get(Num::Phi)),
+            r: n.get(Num::R) * m,
+        },
+        _ => Location::Round {
+            phi: angle.to_radians(n.get(Num::Phi)),
+            r: 0.5 * n.get(Num::D) * m,
+        },
+    }
+}
+
+/// Runs the chosen path through core: the stress tensor in `unit`, and what else it found.
+/// For [`Source::Typed`] this returns `Ok(None)`.
+///
+/// # Errors
+/// Every problem found, each attached to its number.
+pub fn evaluate(
+    c: &Choices,
+    n: &impl Numbers,
+    unit: StressUnit,
+    angle: AngleUnit,
+) -> Result<Option<(StressTensor, Outcome)>, SourceProblem> {
+    let to_unit = 1.0 / unit.pascals();
+    let overflow = |num: Num| problem(num, "the result overflows; check the magnitudes");
+    match c.source {
+        Source::Typed => Ok(None),
+        Source::Section => {
+            if matches!(c.kind, SectionKind::ThinCylinder | SectionKind::ThinSphere) {
+                return thin_vessel(c, n, unit).map(Some);
+            }
+            let s = section(c, n)?;
+            let (loads, pressure, k) = section_loads(c, n);
+            let at = point(c, n, angle);
+            let tensor = s
+                .stress_at(&loads, &pressure, k, at)
+                .map_err(|e| section_problem(e, c))?
+                .scaled(to_unit)
+                .map_err(|_| overflow(Num::N))?;
+            let scan = s
+                .scan(&loads, &pressure, k, SCAN_SAMPLES)
+                .map_err(|e| section_problem(e, c))?;
+            let warnings = vec![SAINT_VENANT];
+            Ok(Some((
+                tensor,
+                Outcome::Section(SectionOutcome {
+                    properties: Some(s.properties()),
+                    scan: Some(scan_in_units(scan, unit, c.length)),
+                    vessel_surfaces: None,
+                    warnings,
+                }),
+            )))
+        }
+        Source::Rosette => {
+            let (material, _) = elastic(c, n)?;
+            let s = c.strain_unit.factor();
+            let gauges: Vec<Gauge> = (0..c.gauge_count())
+                .map(|i| Gauge {
+                    angle: match c.layout {
+                        Layout::Rectangular => rosette::RECTANGULAR[usize::from(i)],
+                        Layout::Delta => rosette::DELTA[usize::from(i)],
+                        Layout::Custom => angle.to_radians(n.get(Num::GaugeAngle(i))),
+                    },
+                    strain: n.get(Num::GaugeReading(i)) * s,
+                })
+                .collect();
+            let transverse = c.correct.then(|| Transverse {
+                kt: n.get(Num::GaugeKt) / 100.0,
+                nu0: n.get(Num::GaugeNu0),
+            });
+            let strain = rosette::reduce(&gauges, transverse).map_err(|e| {
+                let num = match e {
+                    RosetteError::NonFinite(i) => Num::GaugeReading(u8::try_from(i).unwrap_or(0)),
+                    RosetteError::BadTransverse => Num::GaugeKt,
+                    _ if c.layout == Layout::Custom => Num::GaugeAngle(0),
+                    _ => Num::GaugeReading(0),
+                };
+                problem(num, e.to_string())
+            })?;
+            let tensor = strain
+                .stress(&material)
+                .and_then(|t| t.scaled(to_unit))
+                .map_err(|_| overflow(Num::GaugeReading(0)))?;
+            Ok(Some((
+                tensor,
+                Outcome::Rosette(RosetteOutcome { gauges, strain }),
+            )))
+        }
+        Source::Strain => {
+            let (material, thermal) = elastic(c, n)?;
+            let s = c.strain_unit.factor();
+            let (ex, ey, gxy) = (n.get(Num::Ex) * s, n.get(Num::Ey) * s, n.get(Num::Gxy) * s);
+            let (tensor, strain) = match c.condition {
+                Condition::PlaneStress => {
+                    let (t, ez) = material
+                        .plane_stress(ex, ey, gxy, thermal)
+                        .map_err(|_| overflow(Num::Ex))?;
+                    (
+                        t,
+                        Strain {
+                            ex,
+                            ey,
+                            ez,
+                            gxy,
+                            ..Strain::default()
+                        },
+                    )
+                }
+                Condition::PlaneStrain => (
+                    material
+                        .plane_strain(ex, ey, gxy, thermal)
+                        .map_err(|_| overflow(Num::Ex))?,
+                    Strain {
+                        ex,
+                        ey,
+                        gxy,
+                        ..Strain::default()
+                    },
+                ),
+                Condition::Full => {
+                    let st = Strain {
+                        ex,
+                        ey,
+                        ez: n.get(Num::Ez) * s,
+                        gxy,
+                        gyz: n.get(Num::Gyz) * s,
+                        gzx: n.get(Num::Gzx) * s,
+                    };
+                    (
+                        material
+                            .stress(&st, thermal)
+                            .map_err(|_| overflow(Num::Ex))?,
+                        st,
+                    )
+                }
+            };
+            let tensor = tensor.scaled(to_unit).map_err(|_| overflow(Num::Ex))?;
+            Ok(Some((tensor, Outcome::Strain(StrainOutcome { strain }))))
+        }
+    }
+}
+
+fn thin_vessel(
+    c: &Choices,
+    n: &impl Numbers,
+    unit: StressUnit,
+) -> Result<(StressTensor, Outcome), SourceProblem> {
+    let m = c.length.metres();
+    let (r, t) = (0.5 * n.get(Num::D) * m, n.get(Num::Wall) * m);
+    let p = n.get(Num::Pin) * c.pressure.pascals();
+    let wall = |inner: bool| match c.kind {
+        SectionKind::ThinSphere => vessel::thin_sphere(p, r, t, inner),
+        _ => vessel::thin_cylinder(p, r, t, c.ends, inner),
+    };
+    let to = |w: vessel::WallStress| {
+        w.tensor()
+            .and_then(|s| s.scaled(1.0 / unit.pascals()))
+            .map_err(|_| problem(Num::Pin, "the result overflows; check the magnitudes"))
+    };
+    let outer = to(wall(false).map_err(vessel_problem)?)?;
+    let inner = to(wall(true).map_err(vessel_problem)?)?;
+    let warnings = vessel::thin_wall_warning(r, t).into_iter().collect();
+    let vm = |s: &StressTensor| stresscase_core::Equivalent::of(s).von_mises;
+    let tensor = if c.surface == Surface::Inner {
+        inner
+    } else {
+        outer
+    };
+    Ok((
+        tensor,
+        Outcome::Section(SectionOutcome {
+            properties: None,
+            scan: None,
+            vessel_surfaces: Some([vm(&outer), vm(&inner)]),
+            warnings,
+        }),
+    ))
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use std::collections::BTreeMap;
+
+    struct Map(BTreeMap<Num, f64>);
+    impl Numbers for Map {
+        fn get(&self, n: Num) -> f64 {
+            self.0.get(&n).copied().unwrap_or(0.0)
+        }
+    }
+
+    fn demo(c: &Choices) -> Map {
+        Map(c
+            .active()
+            .into_iter()
+            .map(|n| (n, n.demo_text().parse().unwrap()))
+            .collect())
+    }
+
+    #[test]
+    fn every_source_and_kind_evaluates_its_demo() {
+        for source in [Source::Section, Source::Rosette, Source::Strain] {
+            for (kind, _) in tokens::KIND {
+                for (layout, _) in tokens::LAYOUT {
+                    for (condition, _) in tokens::CONDITION {
+                        let c = Choices {
+                            source,
+                            kind,
+                            layout,
+                            condition,
+                            ..Choices::default()
+                        };
+                        let n = demo(&c);
+                        let r = evaluate(&c, &n, StressUnit::MPa, AngleUnit::Degree);
+                        assert!(
+                            matches!(r, Ok(Some(_))),
+                            "{source:?} {kind:?} {layout:?} {condition:?}: {r:?}"
+                        );
+                    }
+                }
+            }
+        }
+    }
+
+    #[test]
+    fn keys_and_ids_are_unique() {
+        let all = Num::all();
+        let mut keys: Vec<_> = all.iter().map(|n| n.key()).collect();
+        let mut ids: Vec<_> = all.iter().map(|n| n.id()).collect();
+        keys.sort_unstable();
+        keys.dedup();
+        ids.sort_unstable();
+        ids.dedup();
+        assert_eq!(keys.len(), all.len());
+        assert_eq!(ids.len(), all.len());
+    }
+
+    #[test]
+    fn the_shaft_demo_matches_the_textbook_outer_fibre() {
+        // 40 mm shaft, Mz = 380 N·m, T = 520 N·m, N = 12 kN, Vy = 4.5 kN at φ = 180° (y = −r):
+        // σx = N/A + 32M/(πd³) and τ = 16T/(πd³) (standard formulas; the shear from Vy is zero on
+        // the extreme fibre).
+        let c = Choices {
+            source: Source::Section,
+            ..Choices::default()
+        };
+        let (t, _) = evaluate(&c, &demo(&c), StressUnit::MPa, AngleUnit::Degree)
+            .unwrap()
+            .unwrap();
+        let d = 0.04_f64;
+        let pi = core::f64::consts::PI;
+        let sx = 12e3 / (pi * d * d / 4.0) + 32.0 * 380.0 / (pi * d * d * d);
+        assert!((t.sx() - sx / 1e6).abs() < 1e-9, "{}", t.sx());
+        assert!((t.txy() - 16.0 * 520.0 / (pi * d * d * d) / 1e6).abs() < 1e-9);
+    }
+
+    #[test]
+    fn a_singular_custom_rosette_is_refused_on_the_angles() {
+        let c = Choices {
+            source: Source::Rosette,
+            layout: Layout::Custom,
+            gauges: 3,
+            ..Choices::default()
+        };
+        let mut n = demo(&c);
+        n.0.insert(Num::GaugeAngle(0), 0.0);
+        n.0.insert(Num::GaugeAngle(1), 180.0);
+        n.0.insert(Num::GaugeAngle(2), 360.0);
+        let e = evaluate(&c, &n, StressUnit::MPa, AngleUnit::Degree).unwrap_err();
+        assert_eq!(e.num, Num::GaugeAngle(0));
+        assert!(
+            e.message.contains("three different directions"),
+            "{}",
+            e.message
+        );
+    }
+
+    #[test]
+    fn bad_geometry_names_its_field() {
+        let c = Choices {
+            source: Source::Section,
+            kind: SectionKind::Tube,
+            ..Choices::default()
+        };
+        let mut n = demo(&c);
+        n.0.insert(Num::Di, 50.0);
+        let e = evaluate(&c, &n, StressUnit::MPa, AngleUnit::Degree).unwrap_err();
+        assert_eq!(e.num, Num::Di);
+        n.0.insert(Num::Di, 28.0);
+        n.0.insert(Num::R, 25.0);
+        let e = evaluate(&c, &n, StressUnit::MPa, AngleUnit::Degree).unwrap_err();
+        assert_eq!(e.num, Num::R);
+        assert!(e.message.contains("outside the section"), "{}", e.message);
+        let c = Choices {
+            source: Source::Strain,
+            ..Choices::default()
+        };
+        let mut n = demo(&c);
+        n.0.insert(Num::Nu, 0.5);
+        assert_eq!(
+            evaluate(&c, &n, StressUnit::MPa, AngleUnit::Degree)
+                .unwrap_err()
+                .num,
+            Num::Nu
+        );
+    }
+}
