@@ -5,13 +5,14 @@
 
 use serde_json::Value;
 use std::collections::BTreeMap;
+use stresscase_core::material;
 use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
 use stresscase_core::{AngleUnit, ShearAxis, StressUnit};
 use stresscase_tests::check::data_path;
 use stresscase_web::case::Mode;
 use stresscase_web::link::{Case, LinkError};
 use stresscase_web::saved::Library;
-use stresscase_web::source::{tokens, Choices, Num};
+use stresscase_web::source::{tokens, Choices, MaterialPick, Num};
 
 fn expected(v: &Value) -> Case {
     let nums = |k: &str| -> Vec<f64> {
@@ -24,13 +25,15 @@ fn expected(v: &Value) -> Case {
     let s = nums("stress");
     let n = nums("normal");
     // Cases without a "source" are typed components with the default elastic constants
-    // (E = 200 GPa, ν = 0.3, α = 12 µε/K, ΔT = 0 K: the documented defaults).
+    // (E = 200 GPa, ν = 0.3, α = 12 µε/K, ΔT = 0 K), material and required factor 2: the
+    // documented defaults.
     let mut choices = Choices::default();
     let mut numbers: BTreeMap<Num, f64> = [
         (Num::E, 200.0),
         (Num::Nu, 0.3),
         (Num::Alpha, 12.0),
         (Num::DeltaT, 0.0),
+        (Num::Required, 2.0),
     ]
     .into_iter()
     .collect();
@@ -81,6 +84,39 @@ fn expected(v: &Value) -> Case {
         }
         if let Some(t) = word("eu") {
             c.modulus_unit = StressUnit::from_symbol(t).expect("eu");
+        }
+        if let Some(t) = word("mat") {
+            c.material = if t == "own" {
+                MaterialPick::Own
+            } else {
+                MaterialPick::Table(
+                    material::TABLE
+                        .iter()
+                        .position(|m| m.key == t)
+                        .expect("mat"),
+                )
+            };
+        }
+        if let Some(t) = word("msu") {
+            c.strength_unit = StressUnit::from_symbol(t).expect("msu");
+        }
+        if let Some(t) = word("crit") {
+            c.criterion = tokens::value(&tokens::CRITERION, t).expect("crit");
+        }
+        if let Some(t) = word("fat") {
+            c.fatigue = t == "on";
+        }
+        if let Some(t) = word("cyc") {
+            c.cycle = tokens::value(&tokens::CYCLE, t).expect("cyc");
+        }
+        if let Some(t) = word("sem") {
+            c.endurance = tokens::value(&tokens::ENDURANCE, t).expect("sem");
+        }
+        if let Some(t) = word("fsurf") {
+            c.finish = tokens::value(&tokens::FINISH, t).expect("fsurf");
+        }
+        if let Some(t) = word("fload") {
+            c.loading = tokens::value(&tokens::LOADING, t).expect("fload");
         }
         for (k, x) in src["numbers"].as_object().expect("numbers") {
             let num = Num::all()

@@ -45,3 +45,17 @@ pub fn wrap(x: f64, period: f64) -> f64 {
         r
     }
 }
+
+/// x raised to the power y.
+#[inline]
+#[must_use]
+pub fn powf(x: f64, y: f64) -> f64 {
+    #[cfg(feature = "std")]
+    {
+        f64::powf(x, y)
+    }
+    #[cfg(not(feature = "std"))]
+    {
+        libm::pow(x, y)
+    }
+}

@@ -21,11 +21,14 @@ extern crate alloc;
 #[cfg(any(feature = "std", test))]
 extern crate std;
 
+pub mod criteria;
 pub mod equivalent;
 pub mod error;
+pub mod fatigue;
 pub mod fmath;
 pub mod hooke;
 pub mod invariants;
+pub mod material;
 pub mod mohr;
 pub mod principal;
 pub mod rosette;

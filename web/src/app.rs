@@ -6,11 +6,12 @@ use crate::history::{HistoryAction, HistoryPolicy};
 use crate::link::Case;
 use crate::panels::{
     case_shelf::CaseShelf, caution::CautionNote, elastic_entry::ElasticEntry,
-    element_turn::ElementTurn, link_notice::LinkNotice, mohr_diagram::MohrDiagram,
-    number_field::SharedResult, plane_probe::PlaneProbe, results::ResultsPanel,
-    rosette_entry::RosetteEntry, scan_plot::ScanPlot, section_loads::SectionLoads,
-    source_pick::SourcePick, stale_notice::StaleNotice, strain_circle::StrainCircle,
-    strain_entry::StrainEntry, stress_element::StressElement, stress_entry::StressEntry,
+    element_turn::ElementTurn, fatigue_check::FatigueCheck, link_notice::LinkNotice,
+    mohr_diagram::MohrDiagram, number_field::SharedResult, plane_probe::PlaneProbe,
+    results::ResultsPanel, rosette_entry::RosetteEntry, scan_plot::ScanPlot,
+    section_loads::SectionLoads, source_pick::SourcePick, stale_notice::StaleNotice,
+    strain_circle::StrainCircle, strain_entry::StrainEntry, stress_element::StressElement,
+    stress_entry::StressEntry, verdict::Verdict,
 };
 use leptos::prelude::*;
 
@@ -132,6 +133,10 @@ pub fn App() -> impl IntoView {
                 <StrainCircle shown=shown/>
             </div>
         </main>
+        <div class="decision" class:stale=move || stale.get()>
+            <Verdict form=form shown=shown/>
+            <FatigueCheck form=form shown=shown/>
+        </div>
         <ResultsPanel shown=shown stale=stale/>
         <footer class="conventions" id="conventions">
             <h2>"Conventions"</h2>

@@ -202,6 +202,7 @@ impl CaseForm {
         match field {
             Field::Angle => self.angle_unit.symbol(),
             Field::Nx | Field::Ny | Field::Nz | Field::Title | Field::Note => "",
+            Field::Src(n) if n.quantity() == Quantity::CaseStress => self.unit.symbol(),
             Field::Src(n) => n.unit(&self.choices, self.angle_unit),
             _ => self.unit.symbol(),
         }
@@ -239,6 +240,15 @@ impl CaseForm {
             self.choices.modulus_unit.convert(1.0, to),
         );
         self.choices.modulus_unit = to;
+    }
+
+    /// Changes the unit of the user's strengths and endurance limit, converting them.
+    pub fn change_strength_unit(&mut self, to: StressUnit) {
+        self.convert_quantity(
+            Quantity::Strength,
+            self.choices.strength_unit.convert(1.0, to),
+        );
+        self.choices.strength_unit = to;
     }
 
     /// Changes the strain unit, converting readings and strains.
@@ -319,6 +329,7 @@ impl CaseForm {
                 *shown = format_for_entry(typed_unit.convert(v, to));
             }
         }
+        self.convert_quantity(Quantity::CaseStress, self.unit.convert(1.0, to));
         self.unit = to;
     }
 
@@ -362,6 +373,7 @@ impl CaseForm {
     pub fn problem(&self, field: Field) -> Option<String> {
         match field {
             _ if !self.is_active(field) => None,
+            Field::Src(n) if n.is_optional() && self.text(field).trim().is_empty() => None,
             Field::Title => check_text(&self.title, MAX_TITLE).err().map(str::to_string),
             Field::Note => check_text(&self.note, MAX_NOTE).err().map(str::to_string),
             _ => parse_number(self.text(field)).err().map(|e| e.to_string()),
@@ -422,6 +434,8 @@ impl Case {
             .scaled(self.unit.pascals())
             .map(|t| material.strain(&t, thermal))
             .map_err(|e| fail(Field::Sx, e))?;
+        let judgement =
+            crate::judge::judge(&self.choices, self, &tensor, self.unit).map_err(from_source)?;
         let theta = self.angle_unit.to_radians(angle);
         let probe = PlaneTraction::on(&tensor, Vector3::new(n[0], n[1], n[2]))
             .map_err(|e| fail(Field::Nx, e))?;
@@ -447,6 +461,7 @@ impl Case {
             choices: self.choices,
             outcome,
             strain,
+            judgement,
             shear_axis: self.shear_axis,
             tensor,
             theta,
@@ -475,6 +490,9 @@ impl Numbers for Case {
     fn get(&self, n: Num) -> f64 {
         self.numbers.get(&n).copied().unwrap_or(0.0)
     }
+    fn absent(&self, n: Num) -> bool {
+        !self.numbers.contains_key(&n)
+    }
 }
 
 /// Everything core says about the case, in the case's stress unit (angles in radians).
@@ -492,6 +510,8 @@ pub struct Evaluation {
     /// The strain state of this stress by Hooke's law with the case's E, ν and α·ΔT
     /// (dimensionless, engineering shear).
     pub strain: Strain,
+    /// The material's verdict on this state, and the fatigue check.
+    pub judgement: crate::judge::Judgement,
     /// Shear plotting convention.
     pub shear_axis: ShearAxis,
     /// The validated tensor.

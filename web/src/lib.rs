@@ -7,6 +7,7 @@ pub mod browser;
 pub mod case;
 pub mod entry;
 pub mod history;
+pub mod judge;
 pub mod link;
 pub mod numfmt;
 pub mod panels;

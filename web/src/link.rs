@@ -34,10 +34,13 @@
 
 use crate::case::{CaseForm, Field, FieldProblem, Mode};
 use crate::entry::parse_number;
-use crate::source::{tokens, Choices, Layout, Num, Source, ELASTIC, MAX_GAUGES};
+use crate::source::{
+    tokens, Choices, Endurance, Layout, MaterialPick, Num, Source, ELASTIC, MAX_GAUGES,
+};
 use core::fmt;
 use percent_encoding::{percent_decode_str, utf8_percent_encode, AsciiSet, NON_ALPHANUMERIC};
 use std::collections::BTreeMap;
+use stresscase_core::material;
 use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
 use stresscase_core::{AngleUnit, ShearAxis, StressUnit};
 
@@ -168,7 +171,10 @@ impl fmt::Display for LinkError {
             ),
             Self::ZeroNormal => write!(f, "n: the plane normal has zero length"),
             Self::BadText(k, why) => write!(f, "{k}: {why}"),
-            Self::NotUsed(k, src) => write!(f, "key '{k}' is not used when src={src}"),
+            Self::NotUsed(k, src) => write!(
+                f,
+                "key '{k}' is not used by this case (src={src} and the choices made)"
+            ),
         }
     }
 }
@@ -266,6 +272,7 @@ impl Case {
             .choices
             .active()
             .into_iter()
+            .filter(|&n| !(n.is_optional() && form.text(Field::Src(n)).trim().is_empty()))
             .map(|n| (n, read(Field::Src(n))))
             .collect();
         if normal == [0.0; 3] && !problems.iter().any(|p| Field::NORMAL.contains(&p.field)) {
@@ -491,10 +498,12 @@ impl Case {
                 (Some(v), true) => {
                     numbers.insert(n, read_number(key, v)?);
                 }
-                // Elastic constants came after the first v1 links: absent means the defaults.
-                (None, true) if ELASTIC.contains(&n) => {
+                // Elastic constants and the required factor came after the first v1 links:
+                // absent means the defaults.
+                (None, true) if ELASTIC.contains(&n) || n == Num::Required => {
                     numbers.insert(n, n.demo_text().parse().unwrap_or(0.0));
                 }
+                (None, true) if n.is_optional() => {}
                 (None, true) => return Err(LinkError::Missing(key)),
                 (None, false) => {}
             }
@@ -549,9 +558,9 @@ impl Case {
 }
 
 /// Choice keys of the source paths, in link order.
-const CHOICE_KEYS: [&str; 15] = [
+const CHOICE_KEYS: [&str; 23] = [
     "src", "kind", "lu", "fu", "mu", "pu", "ends", "face", "surf", "layout", "ng", "su", "tsc",
-    "cond", "eu",
+    "cond", "eu", "mat", "msu", "crit", "fat", "cyc", "sem", "fsurf", "fload",
 ];
 
 /// Every key a v1 link may hold.
@@ -608,6 +617,29 @@ fn choice_pairs(c: &Choices) -> Vec<(&'static str, String)> {
         }
     }
     v.push(("eu", c.modulus_unit.symbol().into()));
+    v.push((
+        "mat",
+        match c.material {
+            MaterialPick::Own => "own".into(),
+            MaterialPick::Table(i) => material::TABLE.get(i).map_or("own", |m| m.key).into(),
+        },
+    ));
+    if c.material == MaterialPick::Own || (c.fatigue && c.endurance == Endurance::Given) {
+        v.push(("msu", c.strength_unit.symbol().into()));
+    }
+    v.push((
+        "crit",
+        tokens::token(&tokens::CRITERION, c.criterion).into(),
+    ));
+    v.push(("fat", if c.fatigue { "on" } else { "off" }.into()));
+    if c.fatigue {
+        v.push(("cyc", tokens::token(&tokens::CYCLE, c.cycle).into()));
+        v.push(("sem", tokens::token(&tokens::ENDURANCE, c.endurance).into()));
+        if c.endurance == Endurance::Estimate {
+            v.push(("fsurf", tokens::token(&tokens::FINISH, c.finish).into()));
+            v.push(("fload", tokens::token(&tokens::LOADING, c.loading).into()));
+        }
+    }
     v
 }
 
@@ -742,6 +774,71 @@ fn read_choices<'a>(take: &impl Fn(&'static str) -> Option<&'a str>) -> Result<C
             stress_units,
             d.modulus_unit,
         )?,
+        material: unit(
+            "mat",
+            take("mat"),
+            |t| {
+                if t == "own" {
+                    Some(MaterialPick::Own)
+                } else {
+                    material::TABLE
+                        .iter()
+                        .position(|m| m.key == t)
+                        .map(MaterialPick::Table)
+                }
+            },
+            "own or a built-in material key",
+            d.material,
+        )?,
+        strength_unit: unit(
+            "msu",
+            take("msu"),
+            StressUnit::from_symbol,
+            stress_units,
+            d.strength_unit,
+        )?,
+        criterion: pick(
+            "crit",
+            take("crit"),
+            &tokens::CRITERION,
+            "auto, vm, tresca, normal, cm, mm",
+            d.criterion,
+        )?,
+        fatigue: pick(
+            "fat",
+            take("fat"),
+            &[(true, "on"), (false, "off")],
+            "on, off",
+            d.fatigue,
+        )?,
+        cycle: pick(
+            "cyc",
+            take("cyc"),
+            &tokens::CYCLE,
+            "ratio, min, alt",
+            d.cycle,
+        )?,
+        endurance: pick(
+            "sem",
+            take("sem"),
+            &tokens::ENDURANCE,
+            "estimate, given",
+            d.endurance,
+        )?,
+        finish: pick(
+            "fsurf",
+            take("fsurf"),
+            &tokens::FINISH,
+            "ground, machined, hotrolled, forged",
+            d.finish,
+        )?,
+        loading: pick(
+            "fload",
+            take("fload"),
+            &tokens::LOADING,
+            "bending, axial, torsion",
+            d.loading,
+        )?,
     };
     let used = choice_pairs(&c);
     let src = tokens::token(&tokens::SOURCE, c.source);
@@ -803,6 +900,15 @@ mod tests {
     }
 
     #[test]
+    fn every_link_key_is_distinct() {
+        let mut k = all_keys();
+        let n = k.len();
+        k.sort_unstable();
+        k.dedup();
+        assert_eq!(k.len(), n, "a key is used twice");
+    }
+
+    #[test]
     fn numbers_are_short_and_exact() {
         for v in [
             84.0,
@@ -854,12 +960,23 @@ mod tests {
             ),
             (any::<bool>(), 0usize..4, any::<bool>(), 0usize..3, 3u8..=8),
             (any::<bool>(), any::<bool>(), 0usize..3, 0usize..6),
+            (
+                0usize..=material::TABLE.len(),
+                0usize..6,
+                0usize..6,
+                any::<bool>(),
+                0usize..3,
+                any::<bool>(),
+                0usize..4,
+                0usize..3,
+            ),
         )
             .prop_map(
                 |(
                     (src, kind, lu, fu, mu, pu),
                     (ends, face, surf, layout, ng),
                     (su, tsc, cond, eu),
+                    (mat, msu, crit, fat, cyc, sem, fin, load),
                 )| {
                     Choices {
                         source: tokens::SOURCE[src].0,
@@ -885,6 +1002,18 @@ mod tests {
                             Condition::Full,
                         ][cond],
                         modulus_unit: StressUnit::ALL[eu],
+                        material: if mat == material::TABLE.len() {
+                            MaterialPick::Own
+                        } else {
+                            MaterialPick::Table(mat)
+                        },
+                        strength_unit: StressUnit::ALL[msu],
+                        criterion: tokens::CRITERION[crit].0,
+                        fatigue: fat,
+                        cycle: tokens::CYCLE[cyc].0,
+                        endurance: tokens::ENDURANCE[usize::from(sem)].0,
+                        finish: tokens::FINISH[fin].0,
+                        loading: tokens::LOADING[load].0,
                     }
                 },
             )
@@ -931,6 +1060,21 @@ mod tests {
                 if !used.contains(&"cond") {
                     c.condition = d.condition;
                 }
+                if !used.contains(&"msu") {
+                    c.strength_unit = d.strength_unit;
+                }
+                if !used.contains(&"cyc") {
+                    c.cycle = d.cycle;
+                }
+                if !used.contains(&"sem") {
+                    c.endurance = d.endurance;
+                }
+                if !used.contains(&"fsurf") {
+                    c.finish = d.finish;
+                }
+                if !used.contains(&"fload") {
+                    c.loading = d.loading;
+                }
                 c
             })
     }
@@ -950,7 +1094,7 @@ mod tests {
                 prop::array::uniform3(arb_num()),
                 any::<bool>(),
             ),
-            (arb_choices(), prop::collection::vec(arb_num(), 40)),
+            (arb_choices(), prop::collection::vec(arb_num(), 64)),
         )
             .prop_filter_map(
                 "non-zero normal",

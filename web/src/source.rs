@@ -3,6 +3,8 @@
 //! invented demo scenario), and the call into core that turns them into a stress tensor.
 //! No formula here: every number comes from `stresscase-core`.
 
+use stresscase_core::criteria::Criterion;
+use stresscase_core::fatigue::{Loading, Surface as FatSurface};
 use stresscase_core::hooke::{Elastic, ElasticError, Strain};
 use stresscase_core::rosette::{self, Gauge, RosetteError, RosetteStrain, Transverse};
 use stresscase_core::section::{
@@ -113,6 +115,53 @@ pub struct Choices {
     pub condition: Condition,
     /// Unit of Young's modulus.
     pub modulus_unit: StressUnit,
+    /// The material: a built-in row (index into `material::TABLE`) or the user's own.
+    pub material: MaterialPick,
+    /// Unit of the user's strengths and of a given endurance limit.
+    pub strength_unit: StressUnit,
+    /// The static criterion in use; `None` follows the material's ductility.
+    pub criterion: Option<Criterion>,
+    /// Whether the fatigue check is on.
+    pub fatigue: bool,
+    /// How the cycle's second state is given.
+    pub cycle: Cycle,
+    /// Endurance limit given, or estimated with Marin factors.
+    pub endurance: Endurance,
+    /// Surface finish for ka.
+    pub finish: FatSurface,
+    /// Loading for kb and kc.
+    pub loading: Loading,
+}
+
+/// The material of the case.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum MaterialPick {
+    /// A row of the built-in table.
+    Table(usize),
+    /// The user's own strengths.
+    Own,
+}
+
+/// How the second state of the fatigue cycle is given; the state on screen is the first.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Cycle {
+    /// The state on screen is the maximum; the minimum is R times it.
+    #[default]
+    Ratio,
+    /// The state on screen is the maximum; the minimum is typed or taken from the screen.
+    Minimum,
+    /// The state on screen is the mean; the alternating amplitude is typed or taken.
+    Alternating,
+}
+
+/// Where the endurance limit comes from.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Endurance {
+    /// Estimated for a steel: Se′ = 0.5 Sut with Marin factors.
+    #[default]
+    Estimate,
+    /// Typed by the user.
+    Given,
 }
 
 impl Default for Choices {
@@ -133,6 +182,14 @@ impl Default for Choices {
             correct: false,
             condition: Condition::PlaneStress,
             modulus_unit: StressUnit::GPa,
+            material: MaterialPick::Table(0),
+            strength_unit: StressUnit::MPa,
+            criterion: None,
+            fatigue: false,
+            cycle: Cycle::Ratio,
+            endurance: Endurance::Estimate,
+            finish: FatSurface::Machined,
+            loading: Loading::Bending,
         }
     }
 }
@@ -204,6 +261,28 @@ pub enum Num {
     Alpha,
     /// Temperature change, K.
     DeltaT,
+    /// Own material: tensile yield strength Sy (optional for brittle materials).
+    MatSy,
+    /// Own material: ultimate tensile strength Sut.
+    MatSut,
+    /// Own material: ultimate compressive strength Suc (optional).
+    MatSuc,
+    /// Own material: elongation at fracture, percent.
+    MatElong,
+    /// Required factor of safety.
+    Required,
+    /// Stress ratio R = σmin/σmax of a proportional cycle.
+    Ratio,
+    /// The second state of the cycle (minimum or alternating), component 0..6 in tensor order.
+    Second(u8),
+    /// Endurance limit Se, given.
+    Se,
+    /// Diameter for the size factor, mm.
+    FatD,
+    /// Operating temperature, °C.
+    FatTemp,
+    /// Reliability, percent.
+    FatRel,
 }
 
 /// What a number measures (its unit comes from the choices).
@@ -231,12 +310,24 @@ pub enum Quantity {
     Expansion,
     /// K.
     Temperature,
+    /// The material strength unit.
+    Strength,
+    /// The case's stress unit.
+    CaseStress,
+    /// Always millimetres (a correlation's own unit).
+    Millimetre,
+    /// Always °C (a correlation's own unit).
+    Celsius,
 }
 
 const GAUGE_KEYS_A: [&str; 8] = ["a1", "a2", "a3", "a4", "a5", "a6", "a7", "a8"];
 const GAUGE_KEYS_E: [&str; 8] = ["e1", "e2", "e3", "e4", "e5", "e6", "e7", "e8"];
 const GAUGE_IDS_A: [&str; 8] = [
     "in-ga1", "in-ga2", "in-ga3", "in-ga4", "in-ga5", "in-ga6", "in-ga7", "in-ga8",
+];
+const SECOND_KEYS: [&str; 6] = ["s2x", "s2y", "s2z", "s2xy", "s2yz", "s2zx"];
+const SECOND_IDS: [&str; 6] = [
+    "in-s2x", "in-s2y", "in-s2z", "in-s2xy", "in-s2yz", "in-s2zx",
 ];
 const GAUGE_IDS_E: [&str; 8] = [
     "in-ge1", "in-ge2", "in-ge3", "in-ge4", "in-ge5", "in-ge6", "in-ge7", "in-ge8",
@@ -283,8 +374,22 @@ impl Num {
             Num::Nu,
             Num::Alpha,
             Num::DeltaT,
+            Num::MatSy,
+            Num::MatSut,
+            Num::MatSuc,
+            Num::MatElong,
+            Num::Required,
+            Num::Ratio,
         ]);
+        v.extend((0..6).map(Num::Second));
+        v.extend([Num::Se, Num::FatD, Num::FatTemp, Num::FatRel]);
         v
+    }
+
+    /// Numbers that may be left empty (then absent from the case and its link).
+    #[must_use]
+    pub fn is_optional(self) -> bool {
+        matches!(self, Num::MatSy | Num::MatSuc)
     }
 
     /// The key in a case link.
@@ -323,6 +428,17 @@ impl Num {
             Num::Nu => "nu",
             Num::Alpha => "alpha",
             Num::DeltaT => "dT",
+            Num::MatSy => "msy",
+            Num::MatSut => "msut",
+            Num::MatSuc => "msuc",
+            Num::MatElong => "melong",
+            Num::Required => "nreq",
+            Num::Ratio => "R",
+            Num::Second(i) => SECOND_KEYS[usize::from(i.min(5))],
+            Num::Se => "se",
+            Num::FatD => "fd",
+            Num::FatTemp => "ftemp",
+            Num::FatRel => "frel",
         }
     }
 
@@ -362,6 +478,17 @@ impl Num {
             Num::Nu => "in-nu",
             Num::Alpha => "in-alpha",
             Num::DeltaT => "in-dt",
+            Num::MatSy => "in-msy",
+            Num::MatSut => "in-msut",
+            Num::MatSuc => "in-msuc",
+            Num::MatElong => "in-melong",
+            Num::Required => "in-nreq",
+            Num::Ratio => "in-ratio",
+            Num::Second(i) => SECOND_IDS[usize::from(i.min(5))],
+            Num::Se => "in-se",
+            Num::FatD => "in-fd",
+            Num::FatTemp => "in-ftemp",
+            Num::FatRel => "in-frel",
         }
     }
 
@@ -408,6 +535,23 @@ impl Num {
             Num::Nu => "Poisson's ratio ν".into(),
             Num::Alpha => "expansion coefficient α".into(),
             Num::DeltaT => "temperature change ΔT".into(),
+            Num::MatSy => "yield strength Sy (empty if none)".into(),
+            Num::MatSut => "ultimate tensile Sut".into(),
+            Num::MatSuc => "ultimate compressive Suc (optional)".into(),
+            Num::MatElong => "elongation at fracture".into(),
+            Num::Required => "required factor of safety".into(),
+            Num::Ratio => "stress ratio R = σmin/σmax".into(),
+            Num::Second(i) => {
+                let name = ["σx", "σy", "σz", "τxy", "τyz", "τzx"][usize::from(i.min(5))];
+                match c.cycle {
+                    Cycle::Alternating => format!("{name} alternating"),
+                    _ => format!("{name} at the minimum"),
+                }
+            }
+            Num::Se => "endurance limit Se (corrected)".into(),
+            Num::FatD => "diameter for the size factor".into(),
+            Num::FatTemp => "operating temperature".into(),
+            Num::FatRel => "reliability".into(),
         }
     }
 
@@ -430,6 +574,12 @@ impl Num {
             Num::E => Quantity::Modulus,
             Num::Alpha => Quantity::Expansion,
             Num::DeltaT => Quantity::Temperature,
+            Num::MatSy | Num::MatSut | Num::MatSuc | Num::Se => Quantity::Strength,
+            Num::MatElong | Num::FatRel => Quantity::Percent,
+            Num::Required | Num::Ratio => Quantity::Ratio,
+            Num::Second(_) => Quantity::CaseStress,
+            Num::FatD => Quantity::Millimetre,
+            Num::FatTemp => Quantity::Celsius,
         }
     }
 
@@ -448,6 +598,10 @@ impl Num {
             Quantity::Modulus => c.modulus_unit.symbol(),
             Quantity::Expansion => "µε/K",
             Quantity::Temperature => "K",
+            Quantity::Strength => c.strength_unit.symbol(),
+            Quantity::CaseStress => "",
+            Quantity::Millimetre => "mm",
+            Quantity::Celsius => "°C",
         }
     }
 
@@ -491,6 +645,17 @@ impl Num {
             Num::Nu => "0.3",
             Num::Alpha => "12",
             Num::DeltaT => "0",
+            Num::MatSy => "250",
+            Num::MatSut => "420",
+            Num::MatSuc => "",
+            Num::MatElong => "22",
+            Num::Required => "2",
+            Num::Ratio => "-1",
+            Num::Second(i) => ["-20", "8", "0", "5", "0", "0"][usize::from(i.min(5))],
+            Num::Se => "160",
+            Num::FatD => "40",
+            Num::FatTemp => "20",
+            Num::FatRel => "90",
         }
     }
 }
@@ -512,6 +677,20 @@ impl Choices {
             },
         };
         v.extend(ELASTIC);
+        v.push(Num::Required);
+        if self.material == MaterialPick::Own {
+            v.extend([Num::MatSy, Num::MatSut, Num::MatSuc, Num::MatElong]);
+        }
+        if self.fatigue {
+            match self.cycle {
+                Cycle::Ratio => v.push(Num::Ratio),
+                Cycle::Minimum | Cycle::Alternating => v.extend((0..6).map(Num::Second)),
+            }
+            match self.endurance {
+                Endurance::Given => v.push(Num::Se),
+                Endurance::Estimate => v.extend([Num::FatD, Num::FatTemp, Num::FatRel]),
+            }
+        }
         v
     }
 
@@ -572,7 +751,9 @@ impl Choices {
 
 /// Token tables for the choices, shared by the link writer and reader and the page's selects.
 pub mod tokens {
-    use super::{Condition, Layout, SectionKind, Source, Surface};
+    use super::{Condition, Cycle, Endurance, Layout, SectionKind, Source, Surface};
+    use stresscase_core::criteria::Criterion;
+    use stresscase_core::fatigue::{Loading, Surface as FatSurface};
     use stresscase_core::section::Face;
     use stresscase_core::vessel::Ends;
 
@@ -616,6 +797,40 @@ pub mod tokens {
         (Condition::Full, "3d"),
     ];
 
+    /// `crit`.
+    pub const CRITERION: [(Option<Criterion>, &str); 6] = [
+        (None, "auto"),
+        (Some(Criterion::VonMises), "vm"),
+        (Some(Criterion::Tresca), "tresca"),
+        (Some(Criterion::MaxNormal), "normal"),
+        (Some(Criterion::CoulombMohr), "cm"),
+        (Some(Criterion::ModifiedMohr), "mm"),
+    ];
+    /// `cyc`.
+    pub const CYCLE: [(Cycle, &str); 3] = [
+        (Cycle::Ratio, "ratio"),
+        (Cycle::Minimum, "min"),
+        (Cycle::Alternating, "alt"),
+    ];
+    /// `sem`.
+    pub const ENDURANCE: [(Endurance, &str); 2] = [
+        (Endurance::Estimate, "estimate"),
+        (Endurance::Given, "given"),
+    ];
+    /// `fsurf`.
+    pub const FINISH: [(FatSurface, &str); 4] = [
+        (FatSurface::Ground, "ground"),
+        (FatSurface::Machined, "machined"),
+        (FatSurface::HotRolled, "hotrolled"),
+        (FatSurface::AsForged, "forged"),
+    ];
+    /// `fload`.
+    pub const LOADING: [(Loading, &str); 3] = [
+        (Loading::Bending, "bending"),
+        (Loading::Axial, "axial"),
+        (Loading::Torsion, "torsion"),
+    ];
+
     /// The token of `v` in `table`.
     #[must_use]
     pub fn token<T: PartialEq + Copy>(table: &[(T, &'static str)], v: T) -> &'static str {
@@ -633,6 +848,10 @@ pub mod tokens {
 pub trait Numbers {
     /// The value of `n`.
     fn get(&self, n: Num) -> f64;
+    /// True when an optional number was left empty.
+    fn absent(&self, _n: Num) -> bool {
+        false
+    }
 }
 
 /// A problem with one source number.

@@ -287,6 +287,8 @@ fn test() -> Result {
             "page_offline_and_links",
             "--test",
             "page_sources",
+            "--test",
+            "page_decision",
             "--",
             "--ignored",
             "--test-threads=2",
