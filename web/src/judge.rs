@@ -272,25 +272,7 @@ fn fatigue_check(
 #[cfg(test)]
 mod tests {
     use super::*;
-    use std::collections::BTreeMap;
-
-    struct Map(BTreeMap<Num, f64>);
-    impl Numbers for Map {
-        fn get(&self, n: Num) -> f64 {
-            self.0.get(&n).copied().unwrap_or(0.0)
-        }
-        fn absent(&self, n: Num) -> bool {
-            !self.0.contains_key(&n)
-        }
-    }
-
-    fn demo(c: &Choices) -> Map {
-        Map(c
-            .active()
-            .into_iter()
-            .filter_map(|n| n.demo_text().parse().ok().map(|v| (n, v)))
-            .collect())
-    }
+    use crate::source::test_numbers::demo;
 
     #[test]
     fn a_table_material_is_judged_in_the_case_unit() {

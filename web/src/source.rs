@@ -1236,25 +1236,38 @@ fn thin_vessel(
     ))
 }
 
+/// Numbers as a plain map, for tests of the paths without a form.
 #[cfg(test)]
-mod tests {
-    use super::*;
+pub(crate) mod test_numbers {
+    use super::{Choices, Num, Numbers};
     use std::collections::BTreeMap;
 
-    struct Map(BTreeMap<Num, f64>);
+    /// The numbers of a case, by [`Num`]; a missing one is absent.
+    pub(crate) struct Map(pub(crate) BTreeMap<Num, f64>);
+
     impl Numbers for Map {
         fn get(&self, n: Num) -> f64 {
             self.0.get(&n).copied().unwrap_or(0.0)
         }
+        fn absent(&self, n: Num) -> bool {
+            !self.0.contains_key(&n)
+        }
     }
 
-    fn demo(c: &Choices) -> Map {
+    /// The demo value of every number the choices use (empty optional ones left absent).
+    pub(crate) fn demo(c: &Choices) -> Map {
         Map(c
             .active()
             .into_iter()
-            .map(|n| (n, n.demo_text().parse().unwrap()))
+            .filter_map(|n| n.demo_text().parse().ok().map(|v| (n, v)))
             .collect())
     }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::test_numbers::demo;
+    use super::*;
 
     #[test]
     fn every_source_and_kind_evaluates_its_demo() {

@@ -7,6 +7,7 @@ use crate::numfmt::format_sig;
 use crate::plot::{nice_ticks, Frame, Viewport};
 use crate::source::Outcome;
 use leptos::prelude::*;
+use stresscase_core::MohrCircle;
 
 const W: f64 = 420.0;
 const H: f64 = 300.0;
@@ -53,7 +54,8 @@ pub fn picture(e: &Evaluation) -> Option<Picture> {
     let su = e.choices.strain_unit;
     let k = 1.0 / su.factor();
     let (e1, e2) = (s.principal[0] * k, s.principal[1] * k);
-    let (c, rad) = (0.5 * (e1 + e2), 0.5 * (e1 - e2));
+    let circle = MohrCircle::through(e1, e2);
+    let (c, rad) = (circle.centre, circle.radius);
     let mut lo = e2.min(0.0);
     let mut hi = e1.max(0.0);
     for g in &r.gauges {
