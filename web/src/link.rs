@@ -886,7 +886,45 @@ mod tests {
         c.angle = -1.2345678901234567e-300;
         let link = c.to_link();
         assert!(link.len() <= MAX_LINK_LEN, "{}", link.len());
-        assert_eq!(Case::from_link(&link), Ok(c));
+        assert_eq!(Case::from_link(&link), Ok(c.clone()));
+        // The paths with the most numbers: an 8-gauge rosette with the correction, and a
+        // pressurised tube; both with an own material and a typed fatigue cycle.
+        let long = -1.2345678901234567e-300;
+        for source in [Source::Rosette, Source::Section] {
+            c.mode = Mode::Plane;
+            c.stress = [0.0; 6];
+            c.choices = Choices {
+                source,
+                kind: if source == Source::Section {
+                    crate::source::SectionKind::Tube
+                } else {
+                    Choices::default().kind
+                },
+                layout: if source == Source::Rosette {
+                    Layout::Custom
+                } else {
+                    Choices::default().layout
+                },
+                gauges: if source == Source::Rosette {
+                    MAX_GAUGES
+                } else {
+                    Choices::default().gauges
+                },
+                correct: source == Source::Rosette,
+                material: MaterialPick::Own,
+                fatigue: true,
+                cycle: crate::source::Cycle::Minimum,
+                endurance: Endurance::Given,
+                ..Choices::default()
+            };
+            c.numbers = c.choices.active().into_iter().map(|n| (n, long)).collect();
+            let link = c.to_link();
+            assert!(link.len() <= MAX_LINK_LEN, "{source:?}: {}", link.len());
+            assert!(
+                Case::from_link(&link) == Ok(c.clone()),
+                "{source:?} does not read back"
+            );
+        }
     }
 
     #[test]
