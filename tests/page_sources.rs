@@ -245,3 +245,69 @@ fn strains_by_hookes_law_and_a_link_that_reopens_them() {
     assert_eq!(q.text("document.getElementById('in-ex').value"), "350");
     q.no_console_errors();
 }
+
+#[test]
+#[ignore = "needs the built page: run `cargo xtask test`"]
+fn a_rectangle_in_bending_and_torsion_finds_its_critical_face() {
+    use stresscase_core::section::{Face, Rectangle};
+    let mut p = Page::open();
+    p.b.click("src-section").unwrap();
+    p.wait_for_id("section-kind");
+    p.choose("section-kind", "rect");
+    p.wait_for_id("in-h");
+    // A 20 × 50 mm bar (depth along y, width along z): bending about z and torsion, N·m.
+    for (id, v) in [
+        ("in-h", "20"),
+        ("in-b", "50"),
+        ("in-load-n", "0"),
+        ("in-load-mz", "300"),
+        ("in-load-t", "250"),
+        ("in-load-vy", "0"),
+        ("in-along", "25"),
+    ] {
+        p.b.type_into(id, v).unwrap();
+    }
+    let sec = Section::Rectangle(Rectangle::new(0.020, 0.050).unwrap());
+    let loads = Loads {
+        mz: 300.0,
+        t: 250.0,
+        ..Loads::default()
+    };
+    let k = Concentration::default();
+    let corner = sec
+        .stress_at(
+            &loads,
+            &Pressure::NONE,
+            k,
+            Location::Rectangle {
+                face: Face::PosY,
+                along: 0.025,
+            },
+        )
+        .unwrap();
+    // At the corner the torsion shear vanishes (Saint-Venant): a uniaxial state.
+    p.wait_value("von_mises", Equivalent::of(&corner).von_mises / MPA);
+    assert!(corner.txy().abs() < 1e-6 * corner.sx().abs());
+    let scan = sec.scan(&loads, &Pressure::NONE, k, 72).unwrap();
+    p.wait_value("scan_max_vm", scan.max_von_mises.value / MPA);
+    p.b.click("use-max-vm").unwrap();
+    p.wait_value("von_mises", scan.max_von_mises.value / MPA);
+    // The long faces (±y) carry the largest bending and torsion stresses: the critical point
+    // is at the middle of one of them.
+    let face = p.text("document.getElementById('face').value");
+    assert!(face == "+y" || face == "-y", "face {face}");
+    let along: f64 = p
+        .text("document.getElementById('in-along').value")
+        .parse()
+        .unwrap();
+    assert_eq!(along, 0.0, "z on the face");
+    assert!(p
+        .text("document.querySelector('td[data-key=\"scan_max_vm_at\"]').textContent")
+        .ends_with("z = 0 mm"));
+    assert_eq!(
+        p.text("Array.from(document.querySelectorAll('#scan-svg .face-mark text')).map(t => t.textContent).join(',')"),
+        "face +y,face +z,face −y,face −z"
+    );
+    p.no_console_errors();
+    p.shot("section-rectangle");
+}

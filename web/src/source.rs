@@ -976,9 +976,23 @@ fn scan_in_units(mut scan: Scan, unit: StressUnit, length: LengthUnit) -> Scan {
             s.position *= pos;
         }
     }
+    // Positions found by the search carry noise of about 1e-12 of the section's size: a point
+    // at the middle of a face should read 0, not 1e-14.
+    let size = scan
+        .curves
+        .iter()
+        .flat_map(|c| c.samples.iter().map(|s| s.position.abs()))
+        .fold(0.0_f64, f64::max);
+    let snap = |v: f64, scale: f64| if v.abs() < 1e-9 * scale { 0.0 } else { v };
     for c in [&mut scan.max_von_mises, &mut scan.max_principal] {
         c.value *= k;
-        c.at = location_in(c.at, l);
+        c.at = match location_in(c.at, l) {
+            Location::Rectangle { face, along } => Location::Rectangle {
+                face,
+                along: snap(along, size),
+            },
+            round => round,
+        };
         if matches!(c.at, Location::Rectangle { .. }) {
             c.position *= l;
         }

@@ -211,6 +211,13 @@ fn use_point(form: &mut CaseForm, at: Location) {
         }
         Location::Rectangle { face, along } => {
             form.choices.face = face;
+            // Seven significant digits are plenty for a position and hide search noise.
+            let along = if along == 0.0 {
+                0.0
+            } else {
+                let step = 10f64.powi(along.abs().log10().floor() as i32 - 6);
+                (along / step).round() * step
+            };
             form.set_text(Field::Src(Num::Along), format_for_entry(along));
         }
     }
@@ -364,6 +371,14 @@ mod tests {
         );
         assert_eq!(f.choices.face, Face::NegZ);
         assert_eq!(f.text(Field::Src(Num::Along)), "7.5");
+        use_point(
+            &mut f,
+            Location::Rectangle {
+                face: Face::PosY,
+                along: 12.345678912345,
+            },
+        );
+        assert_eq!(f.text(Field::Src(Num::Along)), "12.34568");
         f.choices.kind = SectionKind::Tube;
         use_point(
             &mut f,
