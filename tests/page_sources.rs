@@ -65,6 +65,12 @@ fn loads_on_a_tube_find_the_critical_point_and_its_circles() {
     // One click moves the point to the critical one; the stress view follows.
     p.b.click("use-max-vm").unwrap();
     p.wait_value("von_mises", max_vm);
+    // On the section sketch the chosen point now sits on the highest-von-Mises mark.
+    p.b.wait_for(
+        "(() => { const q = (r) => document.querySelector(`#section-svg circle[data-role=\"${r}\"]`); const c = q('chosen'), m = q('max-vm'); return c !== null && m !== null && Math.hypot(c.cx.baseVal.value - m.cx.baseVal.value, c.cy.baseVal.value - m.cy.baseVal.value) < 0.5; })()",
+        stresscase_tests::page::WAIT,
+    )
+    .expect("the sketch shows the chosen point at the critical one");
     let Location::Round { phi, r } = scan.max_von_mises.at else {
         panic!("round section")
     };

@@ -14,6 +14,7 @@ pub mod results;
 pub mod rosette_entry;
 pub mod scan_plot;
 pub mod section_loads;
+pub mod section_sketch;
 pub mod source_pick;
 pub mod stale_notice;
 pub mod strain_circle;

@@ -6,6 +6,7 @@ use crate::link::Case;
 use crate::numfmt::format_for_entry;
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::number_field::SourceFields;
+use crate::panels::section_sketch::SectionSketch;
 use crate::source::{self, tokens, Num, Outcome, SectionKind, Source, Surface};
 use leptos::prelude::*;
 use stresscase_core::section::Section;
@@ -121,6 +122,7 @@ pub fn SectionLoads(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                             set=|f, v| f.choices.surface = if v == "outer" { Surface::Outer } else { Surface::Inner }/>
                     })}
                     <SourceFields form=form nums=vec![Num::Phi, Num::R, Num::Along]/>
+                    {(!thin).then(|| view! { <SectionSketch form=form shown=shown/> })}
                     {(k == SectionKind::Tube).then(|| view! {
                         <div class="buttons">
                             <button type="button" id="to-outer" on:click=move |_| form.update(|f| to_surface(f, true))>"Outer surface"</button>
