@@ -12,7 +12,7 @@ use stresscase_tests::check::data_path;
 use stresscase_web::case::Mode;
 use stresscase_web::link::{Case, LinkError};
 use stresscase_web::saved::Library;
-use stresscase_web::source::{tokens, Choices, MaterialPick, Num};
+use stresscase_web::source::{tokens, Choices, ElasticFrom, MaterialPick, Num};
 
 fn expected(v: &Value) -> Case {
     let nums = |k: &str| -> Vec<f64> {
@@ -117,6 +117,18 @@ fn expected(v: &Value) -> Case {
         }
         if let Some(t) = word("fload") {
             c.loading = tokens::value(&tokens::LOADING, t).expect("fload");
+        }
+        if let Some(t) = word("ec") {
+            c.elastic = tokens::value(&tokens::ELASTIC_FROM, t).expect("ec");
+            if c.elastic == ElasticFrom::Material {
+                // E, ν and α come from the material: they are not numbers of the case.
+                for n in [Num::E, Num::Nu, Num::Alpha] {
+                    numbers.remove(&n);
+                }
+            }
+        }
+        if let Some(t) = word("fcrit") {
+            c.fatigue_criterion = tokens::value(&tokens::FATIGUE_CRITERION, t).expect("fcrit");
         }
         for (k, x) in src["numbers"].as_object().expect("numbers") {
             let num = Num::all()

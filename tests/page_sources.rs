@@ -44,6 +44,7 @@ fn loads_on_a_tube_find_the_critical_point_and_its_circles() {
         inner: 25.0 * MPA,
         outer: 0.0,
         ends: Ends::Closed,
+        nu: 0.3,
     };
     let k = Concentration::default();
     let scan = sec.scan(&loads, &pr, k, 72).unwrap();
@@ -126,6 +127,9 @@ fn a_delta_rosette_gives_principal_stresses() {
         p.b.type_into(&format!("in-ge{}", i + 1), &v.to_string())
             .unwrap();
     }
+    // Typed constants of an aluminium alloy, not the chosen material's.
+    p.choose("elastic-from", "typed");
+    p.wait_for_id("in-e");
     p.choose("modulus-unit", "GPa");
     p.b.type_into("in-e", "71").unwrap();
     p.b.type_into("in-nu", "0.33").unwrap();
@@ -217,6 +221,8 @@ fn strains_by_hookes_law_and_a_link_that_reopens_them() {
     p.b.click("src-strain").unwrap();
     p.wait_for_id("strain-condition");
     p.choose("strain-condition", "pstrain");
+    p.choose("elastic-from", "typed");
+    p.wait_for_id("in-e");
     for (id, v) in [
         ("in-ex", "350"),
         ("in-ey", "-120"),

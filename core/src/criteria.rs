@@ -15,7 +15,13 @@
 //! - modified Mohr (brittle): f = σ1/Sut when σ3 ≥ 0, or σ1 > 0 > σ3 with −σ3 ≤ σ1;
 //!   f = (Suc − Sut)·σ1/(Suc·Sut) − σ3/Suc when σ1 > 0 > σ3 with −σ3 > σ1; −σ3/Suc when σ1 ≤ 0
 //!
-//! The brittle criteria use Sut and Suc; where no Suc is given, Suc = Sut.
+//! The brittle criteria use Sut and Suc; where no Suc is given, Suc = Sut (printed beside the
+//! figure: [`assumption`]).
+//!
+//! Which criteria apply: von Mises and Tresca to ductile materials, the three brittle criteria to
+//! brittle ones ([`Criterion::applies_to`]; ductile means elongation ≥ 5 %, common practice).
+//! A criterion that does not apply is not a verdict: [`verdicts`] marks it `judged = false`, and
+//! its factor is a reference figure only.
 
 use crate::fmath;
 use crate::material::Strengths;
@@ -70,6 +76,17 @@ impl Criterion {
             Self::MaxNormal => "normal",
             Self::CoulombMohr => "cm",
             Self::ModifiedMohr => "mm",
+        }
+    }
+
+    /// Whether the criterion applies to the material: von Mises and Tresca to ductile ones,
+    /// maximum normal stress, Coulomb–Mohr and modified Mohr to brittle ones (Shigley ch. 5,
+    /// from memory; ductility by elongation ≥ 5 %, common practice).
+    #[must_use]
+    pub fn applies_to(self, s: &Strengths) -> bool {
+        match self {
+            Self::VonMises | Self::Tresca => s.is_ductile(),
+            Self::MaxNormal | Self::CoulombMohr | Self::ModifiedMohr => !s.is_ductile(),
         }
     }
 
@@ -138,11 +155,63 @@ pub fn failure_index(c: Criterion, p: [f64; 3], s: &Strengths) -> Result<f64, Cr
     })
 }
 
+/// The assumption behind a criterion's figure for this material, to print beside it: the
+/// brittle criteria without a compressive strength take Suc = Sut.
+#[must_use]
+pub fn assumption(c: Criterion, s: &Strengths) -> Option<&'static str> {
+    let brittle_form = matches!(
+        c,
+        Criterion::MaxNormal | Criterion::CoulombMohr | Criterion::ModifiedMohr
+    );
+    (brittle_form && s.ultimate_compressive().is_none())
+        .then_some("Suc = Sut assumed (no compressive strength given)")
+}
+
+/// The branch of the modified Mohr envelope that a state lies on (Shigley eq. 5-32, from memory).
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum MohrBranch {
+    /// σ1 governs: σ3 ≥ 0, or σ1 > 0 > σ3 with −σ3 ≤ σ1 (f = σ1/Sut).
+    Tension,
+    /// The sloped line of the fourth quadrant: σ1 > 0 > σ3 with −σ3 > σ1
+    /// (f = (Suc − Sut)·σ1/(Suc·Sut) − σ3/Suc).
+    Mixed,
+    /// σ3 governs: σ1 ≤ 0 (f = −σ3/Suc).
+    Compression,
+}
+
+impl MohrBranch {
+    /// The branch of sorted principal stresses `p`.
+    #[must_use]
+    pub fn of(p: [f64; 3]) -> Self {
+        let [s1, _, s3] = p;
+        if s3 >= 0.0 || (s1 > 0.0 && -s3 <= s1) {
+            Self::Tension
+        } else if s1 <= 0.0 {
+            Self::Compression
+        } else {
+            Self::Mixed
+        }
+    }
+
+    /// The branch in words, with its equation.
+    #[must_use]
+    pub fn describe(self) -> &'static str {
+        match self {
+            Self::Tension => "tension branch: n = Sut/σ1",
+            Self::Mixed => "mixed branch: 1/n = (Suc − Sut)·σ1/(Suc·Sut) − σ3/Suc",
+            Self::Compression => "compression branch: n = Suc/(−σ3)",
+        }
+    }
+}
+
 /// One criterion's verdict.
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub struct Verdict {
     /// The criterion.
     pub criterion: Criterion,
+    /// Whether it applies to the material ([`Criterion::applies_to`]). When false, `factor` is a
+    /// reference figure and `passes`/`margin` must not be shown as a judgement.
+    pub judged: bool,
     /// Factor of safety n = 1/f; `None` when the point is unloaded for this criterion.
     pub factor: Option<f64>,
     /// n ≥ the required factor.
@@ -151,8 +220,9 @@ pub struct Verdict {
     pub margin: Option<f64>,
 }
 
-/// Every criterion applicable to the material, with pass/fail against `required` (≥ 1).
-/// Criteria that need a yield strength the material lacks are left out.
+/// Every criterion that can be computed for the material, with pass/fail against `required`
+/// (≥ 1); `judged` says whether it applies ([`Criterion::applies_to`]). Criteria that need a
+/// yield strength the material lacks are left out.
 #[must_use]
 pub fn verdicts(t: &StressTensor, s: &Strengths, required: f64) -> Vec<Verdict> {
     let p = principal_values(t);
@@ -163,6 +233,7 @@ pub fn verdicts(t: &StressTensor, s: &Strengths, required: f64) -> Vec<Verdict> 
             let factor = (f > 0.0).then(|| 1.0 / f).filter(|n| n.is_finite());
             Some(Verdict {
                 criterion: c,
+                judged: c.applies_to(s),
                 factor,
                 passes: factor.is_none_or(|n| n >= required),
                 margin: factor.map(|n| n / required - 1.0),
@@ -267,6 +338,60 @@ mod tests {
         let unloaded = verdicts(&StressTensor::ZERO, &ductile(), 2.0);
         assert!(unloaded.iter().all(|v| v.factor.is_none() && v.passes));
         assert_eq!(Criterion::suggested(&brittle()), Criterion::ModifiedMohr);
+    }
+
+    #[test]
+    fn only_the_criteria_of_the_materials_kind_are_judged() {
+        let t = StressTensor::plane(80.0, -120.0, 30.0).unwrap();
+        let judged = |s: &Strengths| -> Vec<Criterion> {
+            verdicts(&t, s, 2.0)
+                .into_iter()
+                .filter(|v| v.judged)
+                .map(|v| v.criterion)
+                .collect()
+        };
+        assert_eq!(judged(&ductile()), [Criterion::VonMises, Criterion::Tresca]);
+        assert_eq!(
+            judged(&brittle()),
+            [
+                Criterion::MaxNormal,
+                Criterion::CoulombMohr,
+                Criterion::ModifiedMohr
+            ]
+        );
+        // A ductile material has no Suc: its brittle reference figures say what they assume.
+        assert!(assumption(Criterion::CoulombMohr, &ductile())
+            .unwrap()
+            .contains("Suc = Sut"));
+        assert!(assumption(Criterion::VonMises, &ductile()).is_none());
+        assert!(assumption(Criterion::ModifiedMohr, &brittle()).is_none());
+    }
+
+    #[test]
+    fn the_modified_mohr_branch_is_reported() {
+        // Shigley eq. 5-32 (from memory): the three pieces of the envelope.
+        assert_eq!(MohrBranch::of([150.0, 0.0, -100.0]), MohrBranch::Tension);
+        assert_eq!(MohrBranch::of([150.0, 50.0, 0.0]), MohrBranch::Tension);
+        assert_eq!(MohrBranch::of([50.0, 0.0, -300.0]), MohrBranch::Mixed);
+        assert_eq!(
+            MohrBranch::of([0.0, -10.0, -300.0]),
+            MohrBranch::Compression
+        );
+        // Each branch's equation is the one failure_index uses there.
+        let s = brittle();
+        for p in [
+            [150.0, 0.0, -100.0],
+            [50.0, 0.0, -300.0],
+            [-5.0, -10.0, -300.0],
+        ] {
+            let f = failure_index(Criterion::ModifiedMohr, p, &s).unwrap();
+            let want = match MohrBranch::of(p) {
+                MohrBranch::Tension => p[0] / 200.0,
+                MohrBranch::Mixed => (700.0 - 200.0) * p[0] / (700.0 * 200.0) - p[2] / 700.0,
+                MohrBranch::Compression => -p[2] / 700.0,
+            };
+            assert!((f - want).abs() < 1e-15, "{p:?}");
+        }
     }
 
     #[test]

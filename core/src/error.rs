@@ -24,6 +24,12 @@ pub enum StressError {
     },
     /// A plane normal has zero or non-finite length.
     DegenerateNormal,
+    /// A result computed from finite inputs lies beyond the double-precision range
+    /// (about ±1.8e308); `what` names the result.
+    Overflow {
+        /// Which result (e.g. "the turned element", "the stress in pascals").
+        what: &'static str,
+    },
     /// Two slices that must have the same length do not.
     LengthMismatch {
         /// Length of the input.
@@ -51,6 +57,10 @@ impl fmt::Display for StressError {
                 col + 1,
                 col + 1,
                 row + 1
+            ),
+            Self::Overflow { what } => write!(
+                f,
+                "{what} overflows the number range (about ±1.8e308): the entries are finite but too large for this unit; use a larger unit"
             ),
             Self::DegenerateNormal => {
                 write!(f, "the plane normal has zero length; give at least one non-zero component")

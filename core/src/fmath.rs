@@ -32,6 +32,10 @@ shim! {
     exp(x)
     /// Hyperbolic tangent.
     tanh(x)
+    /// Base-10 logarithm.
+    log10(x)
+    /// Largest integer not above x.
+    floor(x)
 }
 
 /// `x` wrapped into [0, period) (the Euclidean remainder, which `core` lacks for floats).

@@ -187,7 +187,14 @@ pub struct TableMaterial {
     pub e: f64,
     /// Poisson's ratio.
     pub nu: f64,
+    /// Coefficient of thermal expansion near room temperature, µε/K (typical; from memory, see
+    /// [`ALPHA_SOURCE`]).
+    pub alpha: f64,
 }
+
+/// Where the expansion coefficients of the table come from.
+pub const ALPHA_SOURCE: &str =
+    "α: typical room-temperature values, Shigley's table A-5 and ASM handbook data, from memory";
 
 impl TableMaterial {
     /// The row's strengths (MPa), endurance left to the fatigue estimate.
@@ -219,6 +226,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 25.0,
         e: 207.0,
         nu: 0.292,
+        alpha: 11.7,
     },
     TableMaterial {
         key: "1020cd",
@@ -231,6 +239,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 15.0,
         e: 207.0,
         nu: 0.292,
+        alpha: 11.7,
     },
     TableMaterial {
         key: "1045hr",
@@ -243,6 +252,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 16.0,
         e: 207.0,
         nu: 0.292,
+        alpha: 11.7,
     },
     TableMaterial {
         key: "1045cd",
@@ -255,6 +265,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 12.0,
         e: 207.0,
         nu: 0.292,
+        alpha: 11.7,
     },
     TableMaterial {
         key: "4140qt425",
@@ -267,6 +278,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 12.0,
         e: 207.0,
         nu: 0.292,
+        alpha: 12.3,
     },
     TableMaterial {
         key: "304ann",
@@ -279,6 +291,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 40.0,
         e: 193.0,
         nu: 0.29,
+        alpha: 17.3,
     },
     TableMaterial {
         key: "316ann",
@@ -291,6 +304,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 40.0,
         e: 193.0,
         nu: 0.29,
+        alpha: 16.0,
     },
     TableMaterial {
         key: "6061t6",
@@ -303,6 +317,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 12.0,
         e: 68.9,
         nu: 0.33,
+        alpha: 23.6,
     },
     TableMaterial {
         key: "7075t6",
@@ -315,6 +330,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 11.0,
         e: 71.7,
         nu: 0.33,
+        alpha: 23.4,
     },
     TableMaterial {
         key: "ti64",
@@ -327,6 +343,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 10.0,
         e: 114.0,
         nu: 0.34,
+        alpha: 8.6,
     },
     TableMaterial {
         key: "gci30",
@@ -339,6 +356,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 0.5,
         e: 100.0,
         nu: 0.211,
+        alpha: 10.8,
     },
     TableMaterial {
         key: "gci40",
@@ -351,6 +369,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 0.5,
         e: 110.0,
         nu: 0.211,
+        alpha: 10.8,
     },
     TableMaterial {
         key: "c36000",
@@ -363,6 +382,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 25.0,
         e: 97.0,
         nu: 0.31,
+        alpha: 20.5,
     },
     TableMaterial {
         key: "pa66",
@@ -375,6 +395,7 @@ pub const TABLE: [TableMaterial; 14] = [
         elongation: 40.0,
         e: 3.0,
         nu: 0.39,
+        alpha: 80.0,
     },
 ];
 
@@ -396,6 +417,7 @@ mod tests {
         for (i, m) in TABLE.iter().enumerate() {
             assert!(m.strengths().is_ok(), "{}", m.name);
             assert!(m.e > 0.0 && m.nu > 0.0 && m.nu < 0.5, "{}", m.name);
+            assert!(m.alpha > 1.0 && m.alpha < 200.0, "{}", m.name);
             assert!(!m.source.is_empty());
             assert!(TABLE[i + 1..].iter().all(|o| o.key != m.key), "{}", m.key);
         }

@@ -85,11 +85,19 @@ pub struct RosetteStrain {
     pub residuals: Vec<f64>,
     /// In-plane principal strains [ε1, ε2], ε1 ≥ ε2.
     pub principal: [f64; 2],
-    /// Angle from x to the ε1 direction, radians in (−π/2, π/2].
+    /// Angle from x to the ε1 direction, radians in (−π/2, π/2]; 0 and meaningless when
+    /// `isotropic`.
     pub theta_p: f64,
+    /// The in-plane strain is isotropic (εx = εy, γxy = 0 to round-off of the reduction): every
+    /// direction is principal, and no principal angle exists.
+    pub isotropic: bool,
     /// Maximum in-plane shear strain γmax = ε1 − ε2.
     pub gamma_max: f64,
 }
+
+/// Relative size (to the largest reading) below which the reduced in-plane strain circle counts
+/// as a point: round-off of the least-squares solve, far below any gauge's resolution.
+pub const ISOTROPIC_TOLERANCE: f64 = 1e-12;
 
 /// Above this condition number the layout is refused as too close to singular.
 pub const MAX_CONDITION: f64 = 1e6;
@@ -155,13 +163,17 @@ pub fn reduce(
     let ip = StressTensor::plane(ex, ey, 0.5 * gxy)
         .map(|t| InPlane::of(&t))
         .map_err(|_| RosetteError::NonFinite(0))?;
+    let size = gauges.iter().fold(0.0_f64, |m, g| m.max(g.strain.abs()));
+    let isotropic = ip.isotropic || ip.radius <= ISOTROPIC_TOLERANCE * size;
     Ok(RosetteStrain {
         ex,
         ey,
         gxy,
         residuals,
         principal: [ip.sigma_a, ip.sigma_b],
-        theta_p: ip.theta_p,
+        // The least-squares solve leaves round-off of about 1e-15 of the readings.
+        isotropic,
+        theta_p: if isotropic { 0.0 } else { ip.theta_p },
         gamma_max: 2.0 * ip.radius,
     })
 }
@@ -258,6 +270,20 @@ mod tests {
         assert!((r.ey - k * (c - t.kt * a)).abs() < 1e-15);
         let e45 = k * (b - t.kt * (a + c - b));
         assert!((reading(r.ex, r.ey, r.gxy, RECTANGULAR[1]) - e45).abs() < 1e-15);
+    }
+
+    #[test]
+    fn equal_readings_are_isotropic_with_no_principal_angle() {
+        // All gauges reading the same strain: εx = εy, γxy = 0 for any layout (the strain
+        // transformation, e.g. Gere & Goodno §7.7, from memory), so every direction is principal.
+        for layout in [&RECTANGULAR[..], &DELTA[..], &[0.1, 0.9, 2.0, 2.7][..]] {
+            let r = reduce(&gauges(layout, &vec![250e-6; layout.len()]), None).unwrap();
+            assert!(r.isotropic, "{layout:?}: {r:?}");
+            assert!((r.principal[0] - 250e-6).abs() < 1e-15);
+            assert!(r.gamma_max.abs() < 1e-15);
+        }
+        let r = reduce(&gauges(&DELTA, &[400e-6, -100e-6, 250e-6]), None).unwrap();
+        assert!(!r.isotropic);
     }
 
     #[test]

@@ -150,8 +150,10 @@ pub struct Pressure {
     pub inner: f64,
     /// Pressure on the outside (e.g. a shrink fit).
     pub outer: f64,
-    /// Whether the pressure's end load is carried by the wall.
+    /// Whether the pressure's end load is carried by the wall (or the member is in plane strain).
     pub ends: Ends,
+    /// Poisson's ratio, used only with [`Ends::PlaneStrain`] (σz = ν(σr + σθ)).
+    pub nu: f64,
 }
 
 impl Pressure {
@@ -160,6 +162,7 @@ impl Pressure {
         inner: 0.0,
         outer: 0.0,
         ends: Ends::Open,
+        nu: 0.3,
     };
 
     fn is_none(&self) -> bool {
@@ -289,6 +292,18 @@ fn positive(v: f64, name: &'static str) -> Result<f64, SectionError> {
 }
 
 impl Round {
+    /// The radii a scan samples: the outer surface, and for a tube nine radii through the wall
+    /// from the outside in.
+    fn scan_radii(&self) -> Vec<f64> {
+        if self.ri > 0.0 {
+            (0..9)
+                .map(|i| self.ro - (self.ro - self.ri) * f64::from(i) / 8.0)
+                .collect()
+        } else {
+            alloc::vec![self.ro]
+        }
+    }
+
     /// A solid shaft of diameter `d`.
     ///
     /// # Errors
@@ -360,14 +375,14 @@ impl Round {
             if p.inner != 0.0 {
                 return Err(SectionError::NoBore);
             }
-            let axial = if p.ends == Ends::Closed {
-                -p.outer
-            } else {
-                0.0
+            let axial = match p.ends {
+                Ends::Closed => -p.outer,
+                Ends::Open => 0.0,
+                Ends::PlaneStrain => -2.0 * p.nu * p.outer,
             };
             return Ok((-p.outer, -p.outer, axial));
         }
-        let w = vessel::lame(p.inner, p.outer, self.ri, self.ro, r, p.ends)
+        let w = vessel::lame(p.inner, p.outer, self.ri, self.ro, r, p.ends, p.nu)
             .map_err(|_| SectionError::OffSection("r"))?;
         Ok((w.radial, w.hoop, w.axial))
     }
@@ -434,6 +449,27 @@ fn face_series(v: f64, a: f64, c: f64) -> f64 {
 }
 
 impl Rectangle {
+    /// The perimeter positions a scan samples: `n` uniform ones plus every corner and mid-face,
+    /// in order.
+    fn scan_positions(&self, n: usize) -> Vec<f64> {
+        let len = self.perimeter();
+        let mut positions: Vec<f64> = (0..n).map(|i| len * i as f64 / n as f64).collect();
+        let (h, b) = (self.h, self.b);
+        positions.extend([
+            0.0,
+            0.5 * b,
+            b,
+            b + 0.5 * h,
+            b + h,
+            1.5 * b + h,
+            2.0 * b + h,
+            2.0 * b + 1.5 * h,
+        ]);
+        positions.sort_by(f64::total_cmp);
+        positions.dedup_by(|a, b| (*a - *b).abs() < 1e-12 * len);
+        positions
+    }
+
     /// A rectangle of depth `h` (along y) and width `b` (along z).
     ///
     /// # Errors
@@ -673,6 +709,120 @@ impl Section {
         }
     }
 
+    /// The point where `rank` is most severe (see [`Rank`]): the same samples as
+    /// [`scan`](Self::scan), the best of them by severity with ties to the larger tie-breaker,
+    /// then golden-section refinement around it (and through the wall of a tube). The returned
+    /// `value` is the severity there.
+    ///
+    /// This ranks points by the decision being made, e.g. severity = 1/n for a factor of safety
+    /// and tie = mean stress, so that of two equally loaded fibres the tensile one governs.
+    ///
+    /// # Errors
+    /// As [`stress_at`](Self::stress_at).
+    pub fn governing(
+        &self,
+        loads: &Loads,
+        pressure: &Pressure,
+        k: Concentration,
+        samples: usize,
+        rank: &dyn Fn(&StressTensor) -> Rank,
+    ) -> Result<Critical, SectionError> {
+        let n = samples.max(8);
+        match self {
+            Self::Round(s) => self.search_round(s, loads, pressure, k, n, rank),
+            Self::Rectangle(s) => self.search_rectangle(s, loads, pressure, k, n, rank),
+        }
+    }
+
+    fn search_round(
+        &self,
+        s: &Round,
+        loads: &Loads,
+        p: &Pressure,
+        k: Concentration,
+        n: usize,
+        rank: &dyn Fn(&StressTensor) -> Rank,
+    ) -> Result<Critical, SectionError> {
+        let at = |phi: f64, r: f64| self.stress_at(loads, p, k, Location::Round { phi, r });
+        let severity = |phi: f64, r: f64| Ok(rank(&at(phi, r)?).severity_or_least());
+        let step = 2.0 * PI / n as f64;
+        let radii = s.scan_radii();
+        let mut best: Option<(Rank, f64, f64)> = None;
+        for &r in &radii {
+            for j in 0..n {
+                let phi = step * j as f64;
+                let here = rank(&at(phi, r)?);
+                if best.is_none_or(|(b, _, _)| here.beats(&b)) {
+                    best = Some((here, phi, r));
+                }
+            }
+        }
+        let (first, mut phi, mut r) = best.unwrap_or((Rank::LEAST, 0.0, s.ro));
+        let mut value = first.severity_or_least();
+        for _ in 0..3 {
+            let (x, v) = golden_max(phi - step, phi + step, |f| severity(f, r))?;
+            if v > value {
+                (phi, value) = (x, v);
+            }
+            if radii.len() > 1 {
+                let h = (s.ro - s.ri) / 8.0;
+                let (lo, hi) = ((r - h).max(s.ri), (r + h).min(s.ro));
+                let (x, v) = golden_max(lo, hi, |rr| severity(phi, rr))?;
+                if v > value {
+                    (r, value) = (x, v);
+                }
+                // The surfaces themselves are candidates (a maximum is often on one).
+                for edge in [s.ri, s.ro] {
+                    let v = severity(phi, edge)?;
+                    if v > value {
+                        (r, value) = (edge, v);
+                    }
+                }
+            }
+        }
+        let phi = fmath::wrap(phi, 2.0 * PI);
+        Ok(Critical {
+            at: Location::Round { phi, r },
+            position: phi,
+            value,
+        })
+    }
+
+    fn search_rectangle(
+        &self,
+        s: &Rectangle,
+        loads: &Loads,
+        p: &Pressure,
+        k: Concentration,
+        n: usize,
+        rank: &dyn Fn(&StressTensor) -> Rank,
+    ) -> Result<Critical, SectionError> {
+        let len = s.perimeter();
+        let at = |pos: f64| self.stress_at(loads, p, k, s.location_at(pos));
+        let mut best: Option<(Rank, f64)> = None;
+        for pos in s.scan_positions(n) {
+            let here = rank(&at(pos)?);
+            if best.is_none_or(|(b, _)| here.beats(&b)) {
+                best = Some((here, pos));
+            }
+        }
+        let (first, start) = best.unwrap_or((Rank::LEAST, 0.0));
+        let step = len / n as f64;
+        let (x, v) = golden_max(start - step, start + step, |pos| {
+            Ok(rank(&at(pos)?).severity_or_least())
+        })?;
+        let (pos, value) = if v > first.severity_or_least() {
+            (fmath::wrap(x, len), v)
+        } else {
+            (fmath::wrap(start, len), first.severity_or_least())
+        };
+        Ok(Critical {
+            at: s.location_at(pos),
+            position: pos,
+            value,
+        })
+    }
+
     fn scan_round(
         &self,
         s: &Round,
@@ -681,105 +831,34 @@ impl Section {
         k: Concentration,
         n: usize,
     ) -> Result<Scan, SectionError> {
-        let at = |phi: f64, r: f64| -> Result<(f64, f64), SectionError> {
-            Ok(measures(&self.stress_at(
-                loads,
-                p,
-                k,
-                Location::Round { phi, r },
-            )?))
-        };
         let step = 2.0 * PI / n as f64;
-        let radii: Vec<f64> = if s.ri > 0.0 {
-            (0..9)
-                .map(|i| s.ro - (s.ro - s.ri) * f64::from(i) / 8.0)
-                .collect()
-        } else {
-            alloc::vec![s.ro]
-        };
-        // grid[i][j]: radius i, angle j.
-        let mut grid = Vec::with_capacity(radii.len());
-        for &r in &radii {
-            let mut row = Vec::with_capacity(n);
-            for j in 0..n {
-                let phi = step * j as f64;
-                let (vm, s1) = at(phi, r)?;
-                row.push(Sample {
-                    position: phi,
-                    von_mises: vm,
-                    sigma1: s1,
-                });
-            }
-            grid.push(row);
-        }
-        let refine = |pick: fn(&Sample) -> f64| -> Result<Critical, SectionError> {
-            let pick2 = |m: (f64, f64)| {
-                pick(&Sample {
-                    position: 0.0,
-                    von_mises: m.0,
-                    sigma1: m.1,
-                })
-            };
-            let (mut bi, mut bj, mut best) = (0, 0, f64::NEG_INFINITY);
-            for (i, row) in grid.iter().enumerate() {
-                for (j, smp) in row.iter().enumerate() {
-                    if pick(smp) > best {
-                        (bi, bj, best) = (i, j, pick(smp));
-                    }
-                }
-            }
-            let mut r = radii[bi];
-            let mut phi = grid[bi][bj].position;
-            let mut value = best;
-            for _ in 0..3 {
-                let (x, v) = golden_max(phi - step, phi + step, |f| Ok(pick2(at(f, r)?)))?;
-                if v > value {
-                    (phi, value) = (x, v);
-                }
-                if radii.len() > 1 {
-                    let h = (s.ro - s.ri) / 8.0;
-                    let (lo, hi) = ((r - h).max(s.ri), (r + h).min(s.ro));
-                    let (x, v) = golden_max(lo, hi, |rr| Ok(pick2(at(phi, rr)?)))?;
-                    if v > value {
-                        (r, value) = (x, v);
-                    }
-                    // The surfaces themselves are candidates (a maximum is often on one).
-                    for edge in [s.ri, s.ro] {
-                        let v = pick2(at(phi, edge)?);
-                        if v > value {
-                            (r, value) = (edge, v);
-                        }
-                    }
-                }
-            }
-            let phi = fmath::wrap(phi, 2.0 * PI);
-            Ok(Critical {
-                at: Location::Round { phi, r },
+        let sample = |phi: f64, r: f64| -> Result<Sample, SectionError> {
+            let (von_mises, sigma1) =
+                measures(&self.stress_at(loads, p, k, Location::Round { phi, r })?);
+            Ok(Sample {
                 position: phi,
-                value,
+                von_mises,
+                sigma1,
             })
         };
-        let max_von_mises = refine(|m| m.von_mises)?;
-        let max_principal = refine(|m| m.sigma1)?;
-        let last = grid.len() - 1;
-        let mut curves = Vec::new();
-        let mut rows = grid.into_iter().enumerate();
-        if let Some((_, outer)) = rows.next() {
-            curves.push(Curve {
-                path: Path::Outer,
-                samples: outer,
-            });
-        }
-        if let Some((_, bore)) = rows.find(|(i, _)| *i == last && last > 0) {
+        let path = |r: f64| -> Result<Vec<Sample>, SectionError> {
+            (0..n).map(|j| sample(step * j as f64, r)).collect()
+        };
+        let mut curves = alloc::vec![Curve {
+            path: Path::Outer,
+            samples: path(s.ro)?,
+        }];
+        if s.ri > 0.0 {
             curves.push(Curve {
                 path: Path::Bore,
-                samples: bore,
+                samples: path(s.ri)?,
             });
         }
+        let (vm, s1) = rank_by_measures();
         Ok(Scan {
             curves,
-            max_von_mises,
-            max_principal,
+            max_von_mises: self.search_round(s, loads, p, k, n, &vm)?,
+            max_principal: self.search_round(s, loads, p, k, n, &s1)?,
         })
     }
 
@@ -792,36 +871,13 @@ impl Section {
         n: usize,
     ) -> Result<Scan, SectionError> {
         let len = s.perimeter();
-        let at = |pos: f64| -> Result<(f64, f64), SectionError> {
-            Ok(measures(&self.stress_at(
-                loads,
-                p,
-                k,
-                s.location_at(pos),
-            )?))
-        };
-        // Uniform samples plus every corner and mid-face, in order.
-        let mut positions: Vec<f64> = (0..n).map(|i| len * i as f64 / n as f64).collect();
-        let (h, b) = (s.h, s.b);
-        positions.extend([
-            0.0,
-            0.5 * b,
-            b,
-            b + 0.5 * h,
-            b + h,
-            1.5 * b + h,
-            2.0 * b + h,
-            2.0 * b + 1.5 * h,
-        ]);
-        positions.sort_by(f64::total_cmp);
-        positions.dedup_by(|a, b| (*a - *b).abs() < 1e-12 * len);
-        let mut samples = Vec::with_capacity(positions.len() + 1);
-        for &pos in &positions {
-            let (vm, s1) = at(pos)?;
+        let mut samples = Vec::new();
+        for pos in s.scan_positions(n) {
+            let (von_mises, sigma1) = measures(&self.stress_at(loads, p, k, s.location_at(pos))?);
             samples.push(Sample {
                 position: pos,
-                von_mises: vm,
-                sigma1: s1,
+                von_mises,
+                sigma1,
             });
         }
         // Close the loop for the plot.
@@ -831,46 +887,75 @@ impl Section {
                 ..first
             });
         }
-        let step = len / n as f64;
-        let refine = |pick: fn(&Sample) -> f64| -> Result<Critical, SectionError> {
-            let best = samples
-                .iter()
-                .max_by(|a, b| pick(a).total_cmp(&pick(b)))
-                .copied()
-                .unwrap_or(Sample {
-                    position: 0.0,
-                    von_mises: 0.0,
-                    sigma1: 0.0,
-                });
-            let pick2 = |m: (f64, f64)| {
-                pick(&Sample {
-                    position: 0.0,
-                    von_mises: m.0,
-                    sigma1: m.1,
-                })
-            };
-            let (x, v) = golden_max(best.position - step, best.position + step, |pos| {
-                Ok(pick2(at(pos)?))
-            })?;
-            let (pos, value) = if v > pick(&best) {
-                (fmath::wrap(x, len), v)
-            } else {
-                (fmath::wrap(best.position, len), pick(&best))
-            };
-            Ok(Critical {
-                at: s.location_at(pos),
-                position: pos,
-                value,
-            })
-        };
+        let (vm, s1) = rank_by_measures();
         Ok(Scan {
-            max_von_mises: refine(|m| m.von_mises)?,
-            max_principal: refine(|m| m.sigma1)?,
+            max_von_mises: self.search_rectangle(s, loads, p, k, n, &vm)?,
+            max_principal: self.search_rectangle(s, loads, p, k, n, &s1)?,
             curves: alloc::vec![Curve {
                 path: Path::Perimeter,
                 samples,
             }],
         })
+    }
+}
+
+/// The two rankings of [`Section::scan`]: highest von Mises, highest σ1 (no tie-breaker: the
+/// first sample in scan order wins a tie).
+fn rank_by_measures() -> (
+    impl Fn(&StressTensor) -> Rank,
+    impl Fn(&StressTensor) -> Rank,
+) {
+    (
+        |t: &StressTensor| Rank {
+            severity: measures(t).0,
+            tie: 0.0,
+        },
+        |t: &StressTensor| Rank {
+            severity: measures(t).1,
+            tie: 0.0,
+        },
+    )
+}
+
+/// How severe a point is for a decision (larger is worse, e.g. 1/n for a factor of safety n),
+/// and a tie-breaker (larger wins among equally severe points, e.g. the mean stress, so that a
+/// tensile fibre beats an equally loaded compressive one).
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Rank {
+    /// Larger is worse. NaN counts as the least severe.
+    pub severity: f64,
+    /// Decides between severities within [`TIE_TOLERANCE`] of each other; larger wins.
+    pub tie: f64,
+}
+
+/// Relative difference below which two severities are a tie (well above the round-off of
+/// stresses at mirror-image points, far below any engineering difference).
+pub const TIE_TOLERANCE: f64 = 1e-9;
+
+impl Rank {
+    const LEAST: Rank = Rank {
+        severity: f64::MIN,
+        tie: f64::MIN,
+    };
+
+    fn severity_or_least(&self) -> f64 {
+        if self.severity.is_nan() {
+            f64::MIN
+        } else {
+            self.severity.clamp(f64::MIN, f64::MAX)
+        }
+    }
+
+    /// Whether this point is more severe than `other`, ties going to the larger tie-breaker.
+    #[must_use]
+    pub fn beats(&self, other: &Rank) -> bool {
+        let (a, b) = (self.severity_or_least(), other.severity_or_least());
+        let scale = a.abs().max(b.abs());
+        if (a - b).abs() <= TIE_TOLERANCE * scale {
+            self.tie > other.tie
+        } else {
+            a > b
+        }
     }
 }
 
@@ -1011,6 +1096,7 @@ mod tests {
             inner: 30.0,
             outer: 0.0,
             ends: Ends::Closed,
+            nu: 0.3,
         };
         let s = Section::Round(t)
             .stress_at(
@@ -1020,7 +1106,7 @@ mod tests {
                 Location::Round { phi: 1.0, r: 25.0 },
             )
             .unwrap();
-        let w = vessel::lame(30.0, 0.0, 25.0, 40.0, 25.0, Ends::Closed).unwrap();
+        let w = vessel::lame(30.0, 0.0, 25.0, 40.0, 25.0, Ends::Closed, 0.3).unwrap();
         assert_eq!((s.sx(), s.sy(), s.sz()), (w.axial, w.hoop, w.radial));
         // A shrink fit on a solid shaft: uniform σr = σθ = −p.
         let shaft = Round::solid(40.0).unwrap();
@@ -1028,6 +1114,7 @@ mod tests {
             inner: 0.0,
             outer: 60.0,
             ends: Ends::Open,
+            nu: 0.3,
         };
         let s = Section::Round(shaft)
             .stress_at(
@@ -1102,6 +1189,49 @@ mod tests {
         }
     }
 
+    #[test]
+    fn governing_breaks_a_tie_towards_tension_and_follows_the_ranking() {
+        // Ø40 mm shaft, Mz = 1 kN·m, T = 1.5 kN·m: the fibres at φ = 0 and 180° carry equal and
+        // opposite bending stress 32M/(πd³) with the same torsion shear 16T/(πd³) (Gere &
+        // Goodno §3.3, §5.5, from memory), so their von Mises stresses are equal.
+        let sec = Section::Round(Round::solid(0.04).unwrap());
+        let l = Loads {
+            mz: 1000.0,
+            t: 1500.0,
+            ..Loads::default()
+        };
+        let k = Concentration::default();
+        let mean = |t: &StressTensor| (t.sx() + t.sy() + t.sz()) / 3.0;
+        let vm = |t: &StressTensor| Rank {
+            severity: Equivalent::of(t).von_mises,
+            tie: mean(t),
+        };
+        let g = sec.governing(&l, &Pressure::NONE, k, 72, &vm).unwrap();
+        let t = sec.stress_at(&l, &Pressure::NONE, k, g.at).unwrap();
+        let d3 = 0.04_f64.powi(3);
+        let sigma = 32.0 * 1000.0 / (PI * d3);
+        assert!((t.sx() - sigma).abs() < 1e-6 * sigma, "{t:?}");
+        // The opposite tie-breaker picks the compressive fibre.
+        let vm_c = |t: &StressTensor| Rank {
+            severity: Equivalent::of(t).von_mises,
+            tie: -mean(t),
+        };
+        let g = sec.governing(&l, &Pressure::NONE, k, 72, &vm_c).unwrap();
+        let t = sec.stress_at(&l, &Pressure::NONE, k, g.at).unwrap();
+        assert!((t.sx() + sigma).abs() < 1e-6 * sigma, "{t:?}");
+        // A ranking that penalises compression (no tie) finds the tensile fibre on its own.
+        let s1 = |t: &StressTensor| Rank {
+            severity: principal_values(t)[0],
+            tie: 0.0,
+        };
+        let g = sec.governing(&l, &Pressure::NONE, k, 72, &s1).unwrap();
+        let t = sec.stress_at(&l, &Pressure::NONE, k, g.at).unwrap();
+        assert!(t.sx() > 0.0);
+        // The scan's von Mises maximum is the governing point of a von Mises ranking.
+        let scan = sec.scan(&l, &Pressure::NONE, k, 72).unwrap();
+        assert!((scan.max_von_mises.value - Equivalent::of(&t).von_mises).abs() < 1e-6 * sigma);
+    }
+
     proptest! {
         #[test]
         fn the_scan_never_misses_the_combined_bending_and_torsion_maximum(
@@ -1142,7 +1272,7 @@ mod tests {
         ) {
             let tube = Round::tube(60.0, 30.0).unwrap();
             let sec = Section::Round(tube);
-            let pr = Pressure { inner: p, outer: 0.0, ends: Ends::Closed };
+            let pr = Pressure { inner: p, outer: 0.0, ends: Ends::Closed, nu: 0.3 };
             let loads = Loads { t, mz: m, ..Loads::default() };
             let scan = sec.scan(&loads, &pr, Concentration::default(), 24).unwrap();
             // No point of a fine (φ, r) grid beats the scan's maximum.

@@ -214,26 +214,45 @@ impl StressTensor {
     /// The tensor with every component multiplied by `k`.
     ///
     /// # Errors
-    /// [`StressError::NonFinite`] if a product overflows or `k` is not finite.
+    /// [`StressError::NonFinite`] if `k` is not finite; [`StressError::Overflow`] if a product
+    /// overflows.
     pub fn scaled(&self, k: f64) -> Result<Self, StressError> {
+        if !k.is_finite() {
+            return Err(StressError::NonFinite {
+                component: "the scale factor",
+            });
+        }
         let [a, b, c, d, e, f] = self.components().map(|v| v * k);
-        Self::new(a, b, c, d, e, f)
+        Self::new(a, b, c, d, e, f).map_err(|_| StressError::Overflow {
+            what: "the scaled stress",
+        })
+    }
+
+    /// A tensor computed from finite ones: a non-finite component can only be an overflow.
+    ///
+    /// # Errors
+    /// [`StressError::Overflow`] naming `what` when a component is not finite.
+    pub fn derived(c: [f64; 6], what: &'static str) -> Result<Self, StressError> {
+        Self::new(c[0], c[1], c[2], c[3], c[4], c[5]).map_err(|_| StressError::Overflow { what })
     }
 
     /// Component-wise sum.
     ///
     /// # Errors
-    /// [`StressError::NonFinite`] if a sum overflows.
+    /// [`StressError::Overflow`] if a sum overflows.
     pub fn try_add(&self, other: &Self) -> Result<Self, StressError> {
         let a = self.components();
         let b = other.components();
-        Self::new(
-            a[0] + b[0],
-            a[1] + b[1],
-            a[2] + b[2],
-            a[3] + b[3],
-            a[4] + b[4],
-            a[5] + b[5],
+        Self::derived(
+            [
+                a[0] + b[0],
+                a[1] + b[1],
+                a[2] + b[2],
+                a[3] + b[3],
+                a[4] + b[4],
+                a[5] + b[5],
+            ],
+            "the sum of the stresses",
         )
     }
 

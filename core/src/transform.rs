@@ -22,22 +22,23 @@ use serde::{Deserialize, Serialize};
 /// The tensor expressed in axes x′, y′, z turned by `theta` (radians) about z.
 ///
 /// # Errors
-/// [`StressError::NonFinite`] if `theta` is not finite or a component overflows (|σ| near
-/// f64::MAX).
+/// [`StressError::NonFinite`] if `theta` is not finite; [`StressError::Overflow`] if a
+/// component overflows (|σ| near f64::MAX).
 pub fn rotate_about_z(t: &StressTensor, theta: f64) -> Result<StressTensor, StressError> {
     if !theta.is_finite() {
         return Err(StressError::NonFinite { component: "θ" });
     }
     let (s2, c2) = (fmath::sin(2.0 * theta), fmath::cos(2.0 * theta));
     let (s1, c1) = (fmath::sin(theta), fmath::cos(theta));
-    let avg = 0.5 * (t.sx() + t.sy());
-    let half = 0.5 * (t.sx() - t.sy());
+    // Halves first, so that components near f64::MAX do not overflow on the way.
+    let avg = 0.5 * t.sx() + 0.5 * t.sy();
+    let half = 0.5 * t.sx() - 0.5 * t.sy();
     let sxp = avg + half * c2 + t.txy() * s2;
     let syp = avg - half * c2 - t.txy() * s2;
     let txyp = -half * s2 + t.txy() * c2;
     let txzp = t.tzx() * c1 + t.tyz() * s1;
     let tyzp = -t.tzx() * s1 + t.tyz() * c1;
-    StressTensor::new(sxp, syp, t.sz(), txyp, tyzp, txzp)
+    StressTensor::derived([sxp, syp, t.sz(), txyp, tyzp, txzp], "the turned element")
 }
 
 /// Unit normal of the x′ face of an element turned by `theta` radians about z: (cos θ, sin θ, 0).
@@ -49,10 +50,15 @@ pub fn face_normal_about_z(theta: f64) -> Vector3<f64> {
 /// The tensor in axes turned by `r` (columns of `r` are the new axes): σ′ = Rᵀ σ R.
 ///
 /// # Errors
-/// [`StressError::NonFinite`] only if a component overflows (|σ| near f64::MAX).
+/// [`StressError::Overflow`] only if a component overflows (|σ| near f64::MAX).
 pub fn rotate(t: &StressTensor, r: &Rotation3<f64>) -> Result<StressTensor, StressError> {
     let m = r.matrix().transpose() * t.to_matrix() * r.matrix();
-    StressTensor::try_from_nalgebra(&(0.5 * (m + m.transpose())))
+    StressTensor::try_from_nalgebra(&(0.5 * (m + m.transpose()))).map_err(|e| match e {
+        StressError::NonFinite { .. } => StressError::Overflow {
+            what: "the rotated tensor",
+        },
+        other => other,
+    })
 }
 
 /// In-plane (x–y) results of a plane state: the circle, principal and maximum-shear faces.
@@ -76,7 +82,14 @@ pub struct InPlane {
     /// Angle θs = θp − π/4 (radians, wrapped into (−π/2, π/2]) to the face on which τx′y′ = +radius;
     /// the normal stress there is `centre`.
     pub theta_s: f64,
+    /// The in-plane state is isotropic (σx = σy, τxy = 0 to round-off: the circle is a point).
+    /// Every in-plane direction is then principal; θp and θs are set to 0 and mean nothing.
+    pub isotropic: bool,
 }
+
+/// Relative size below which an in-plane circle's radius counts as zero (round-off of the
+/// components, about 100 ulp): the state is then isotropic in the plane.
+pub const ISOTROPIC_TOLERANCE: f64 = 1e-14;
 
 fn wrap_half_turn(a: f64) -> f64 {
     use core::f64::consts::PI;
@@ -97,7 +110,9 @@ impl InPlane {
         let centre = 0.5 * t.sx() + 0.5 * t.sy();
         let half = 0.5 * t.sx() - 0.5 * t.sy();
         let radius = fmath::hypot(half, t.txy());
-        let theta_p = if radius == 0.0 {
+        let size = t.sx().abs().max(t.sy().abs()).max(t.txy().abs());
+        let isotropic = radius <= ISOTROPIC_TOLERANCE * size;
+        let theta_p = if isotropic {
             0.0
         } else {
             wrap_half_turn(0.5 * fmath::atan2(t.txy(), half))
@@ -108,7 +123,12 @@ impl InPlane {
             sigma_a: centre + radius,
             sigma_b: centre - radius,
             theta_p,
-            theta_s: wrap_half_turn(theta_p - FRAC_PI_4),
+            theta_s: if isotropic {
+                0.0
+            } else {
+                wrap_half_turn(theta_p - FRAC_PI_4)
+            },
+            isotropic,
         }
     }
 }
@@ -130,17 +150,26 @@ pub struct PlaneTraction {
 }
 
 impl PlaneTraction {
-    /// The traction on the plane with normal `n` (any non-zero length; it is normalised).
+    /// The traction on the plane with normal `n` (any non-zero finite length, 1e-320 and 1e308
+    /// included: it is scaled by its largest component before it is normalised, so squaring
+    /// neither underflows nor overflows).
     ///
     /// # Errors
-    /// [`StressError::DegenerateNormal`] when `n` is zero or not finite.
+    /// [`StressError::DegenerateNormal`] when `n` is zero or not finite;
+    /// [`StressError::Overflow`] when the traction overflows (components near f64::MAX).
     pub fn on(t: &StressTensor, n: Vector3<f64>) -> Result<Self, StressError> {
-        let len = n.norm();
-        if !(len.is_finite() && len > 0.0) {
+        let big = n.amax();
+        if !(big.is_finite() && big > 0.0) || n.iter().any(|v| !v.is_finite()) {
             return Err(StressError::DegenerateNormal);
         }
-        let n = n / len;
+        let n = n / big;
+        let n = n / n.norm();
         let traction = t.traction(&n);
+        if traction.iter().any(|v| !v.is_finite()) {
+            return Err(StressError::Overflow {
+                what: "the traction on the plane",
+            });
+        }
         let normal = n.dot(&traction);
         let shear_vec = traction - n * normal;
         let shear = shear_vec.norm();
@@ -229,5 +258,52 @@ mod tests {
             PlaneTraction::on(&t, Vector3::new(f64::NAN, 0.0, 0.0)),
             Err(StressError::DegenerateNormal)
         );
+    }
+
+    #[test]
+    fn extreme_normals_are_normalised() {
+        // A normal of 1e308 components overflowed the squared length, and one of 1e-320
+        // (subnormal) underflowed it to zero; both are valid directions.
+        let t = StressTensor::plane(84.0, -22.0, 37.0).unwrap();
+        let want = PlaneTraction::on(&t, Vector3::new(1.0, 1.0, 1.0)).unwrap();
+        for k in [1e308, 1.7e308, 1e-320, 5e-324] {
+            let got = PlaneTraction::on(&t, Vector3::new(k, k, k)).unwrap();
+            assert!(
+                (got.normal_vector - want.normal_vector).norm() < 1e-15,
+                "{k}"
+            );
+            assert!((got.normal - want.normal).abs() < 1e-12, "{k}");
+            assert!((got.normal_vector.norm() - 1.0).abs() < 1e-15);
+        }
+        let got = PlaneTraction::on(&t, Vector3::new(1e-320, 0.0, 0.0)).unwrap();
+        assert_eq!(got.normal_vector, Vector3::new(1.0, 0.0, 0.0));
+        assert_eq!(got.normal, 84.0);
+    }
+
+    #[test]
+    fn an_isotropic_plane_state_is_flagged() {
+        // σx = σy, τxy = 0: every in-plane direction is principal (the circle is a point).
+        for (x, y, s) in [(50.0, 50.0, 0.0), (0.0, 0.0, 0.0), (-3e-200, -3e-200, 0.0)] {
+            let ip = InPlane::of(&StressTensor::plane(x, y, s).unwrap());
+            assert!(ip.isotropic, "{x} {y} {s}");
+        }
+        // Round-off of summed components (0.1 + 0.2 vs 0.3) is still isotropic.
+        let ip = InPlane::of(&StressTensor::plane(0.1 + 0.2, 0.3, 0.0).unwrap());
+        assert!(ip.isotropic);
+        let ip = InPlane::of(&StressTensor::plane(50.0, 50.0, 1e-9).unwrap());
+        assert!(!ip.isotropic);
+        assert!((ip.theta_p - FRAC_PI_4).abs() < 1e-12);
+    }
+
+    #[test]
+    fn an_overflowing_turn_says_overflow() {
+        // Finite components whose turned values exceed f64::MAX: an overflow, not a bad σx.
+        let t = StressTensor::plane(1.7e308, -1.7e308, 1.7e308).unwrap();
+        let e = rotate_about_z(&t, 0.3).unwrap_err();
+        assert!(matches!(e, StressError::Overflow { .. }), "{e:?}");
+        assert!(std::format!("{e}").contains("overflows"), "{e}");
+        // The halves-first form keeps σx = σy = 1.7e308 in range.
+        let t = StressTensor::plane(1.7e308, 1.7e308, 0.0).unwrap();
+        assert!(rotate_about_z(&t, 0.3).is_ok());
     }
 }

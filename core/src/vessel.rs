@@ -9,7 +9,9 @@
 //! - Thick cylinder, Lamé 1852 (e.g. Timoshenko & Goodier, *Theory of Elasticity*, §28, from
 //!   memory), inner radius a, outer b, pressures pi, po:
 //!   σr = A − B/r²,  σθ = A + B/r²,  A = (pi·a² − po·b²)/(b² − a²),  B = (pi − po)·a²·b²/(b² − a²),
-//!   σz = A with closed ends (plane sections, end load carried by the wall), 0 with open ends.
+//!   σz = A with closed ends (plane sections, end load carried by the wall), 0 with open ends,
+//!   and σz = ν(σr + σθ) = 2νA in plane strain (εz = 0: a long cylinder restrained axially,
+//!   same source).
 //!
 //! A wall thicker than about a tenth of the radius makes the thin-wall formulas unreliable
 //! (common practice); [`thin_wall_warning`] says so.
@@ -28,6 +30,8 @@ pub enum Ends {
     Closed,
     /// Open ends (e.g. a pipe with sliding seals): σz = 0.
     Open,
+    /// Plane strain (axially restrained, εz = 0): σz = ν(σr + σθ). Lamé cylinders only.
+    PlaneStrain,
 }
 
 /// Why vessel geometry was refused.
@@ -162,7 +166,8 @@ pub fn thin_sphere(p: f64, r: f64, t: f64, inner_surface: bool) -> Result<WallSt
     })
 }
 
-/// Lamé's thick cylinder at radius `r` (a ≤ r ≤ b).
+/// Lamé's thick cylinder at radius `r` (a ≤ r ≤ b); `nu` (Poisson's ratio) is used only with
+/// [`Ends::PlaneStrain`].
 ///
 /// # Errors
 /// [`VesselError`] for bad dimensions, a radius outside the wall, or non-finite pressures.
@@ -173,6 +178,7 @@ pub fn lame(
     b: f64,
     r: f64,
     ends: Ends,
+    nu: f64,
 ) -> Result<WallStress, VesselError> {
     let (pi, po) = (
         finite(pi, "internal pressure")?,
@@ -191,7 +197,11 @@ pub fn lame(
     Ok(WallStress {
         radial: big_a - big_b / (r * r),
         hoop: big_a + big_b / (r * r),
-        axial: if ends == Ends::Closed { big_a } else { 0.0 },
+        axial: match ends {
+            Ends::Closed => big_a,
+            Ends::Open => 0.0,
+            Ends::PlaneStrain => 2.0 * nu * big_a,
+        },
     })
 }
 
@@ -235,19 +245,19 @@ mod tests {
     #[test]
     fn lame_refuses_bad_geometry() {
         assert_eq!(
-            lame(1.0, 0.0, 50.0, 40.0, 45.0, Ends::Open),
+            lame(1.0, 0.0, 50.0, 40.0, 45.0, Ends::Open, 0.3),
             Err(VesselError::InnerNotSmaller)
         );
         assert_eq!(
-            lame(1.0, 0.0, 40.0, 50.0, 60.0, Ends::Open),
+            lame(1.0, 0.0, 40.0, 50.0, 60.0, Ends::Open, 0.3),
             Err(VesselError::OutsideWall)
         );
         assert_eq!(
-            lame(1.0, 0.0, -40.0, 50.0, 45.0, Ends::Open),
+            lame(1.0, 0.0, -40.0, 50.0, 45.0, Ends::Open, 0.3),
             Err(VesselError::Dimension("inner radius"))
         );
         assert_eq!(
-            lame(f64::NAN, 0.0, 40.0, 50.0, 45.0, Ends::Open),
+            lame(f64::NAN, 0.0, 40.0, 50.0, 45.0, Ends::Open, 0.3),
             Err(VesselError::Pressure("internal pressure"))
         );
     }
@@ -257,7 +267,7 @@ mod tests {
         // Standard result (Timoshenko & Goodier §28, from memory): with internal pressure only, the
         // largest hoop stress is at the bore, σθ(a) = p(b² + a²)/(b² − a²).
         let (p, a, b) = (30.0, 40.0, 60.0);
-        let w = lame(p, 0.0, a, b, a, Ends::Open).unwrap();
+        let w = lame(p, 0.0, a, b, a, Ends::Open, 0.3).unwrap();
         assert!((w.hoop - p * (b * b + a * a) / (b * b - a * a)).abs() < 1e-12);
         assert!((w.radial + p).abs() < 1e-12);
     }
@@ -269,23 +279,36 @@ mod tests {
         ) {
             let b = a * k;
             let tol = 1e-9 * (1.0 + pi.abs() + po.abs()) * k * k;
-            prop_assert!((lame(pi, po, a, b, a, Ends::Open).unwrap().radial + pi).abs() < tol);
-            prop_assert!((lame(pi, po, a, b, b, Ends::Open).unwrap().radial + po).abs() < tol);
+            prop_assert!((lame(pi, po, a, b, a, Ends::Open, 0.3).unwrap().radial + pi).abs() < tol);
+            prop_assert!((lame(pi, po, a, b, b, Ends::Open, 0.3).unwrap().radial + po).abs() < tol);
             // Radial equilibrium dσr/dr = (σθ − σr)/r, by a central difference.
             let r = a + s * (b - a);
             let h = 1e-4 * (b - a);
             let (r0, r1) = ((r - h).max(a), (r + h).min(b));
-            let d = (lame(pi, po, a, b, r1, Ends::Open).unwrap().radial - lame(pi, po, a, b, r0, Ends::Open).unwrap().radial) / (r1 - r0);
-            let w = lame(pi, po, a, b, r, Ends::Closed).unwrap();
+            let d = (lame(pi, po, a, b, r1, Ends::Open, 0.3).unwrap().radial - lame(pi, po, a, b, r0, Ends::Open, 0.3).unwrap().radial) / (r1 - r0);
+            let w = lame(pi, po, a, b, r, Ends::Closed, 0.3).unwrap();
             prop_assert!((d - (w.hoop - w.radial) / r).abs() < 1e-5 * (1.0 + pi.abs() + po.abs()) * k * k / a);
             // σr + σθ is the same everywhere (2A), and equals 2σz for closed ends.
             prop_assert!((w.radial + w.hoop - 2.0 * w.axial).abs() < tol);
         }
 
         #[test]
+        fn plane_strain_ends_give_nu_times_the_in_plane_sum(pi in 0.0..100.0f64, po in 0.0..100.0f64, a in 1.0..50.0f64, w in 0.5..50.0f64, f in 0.0..1.0f64, nu in 0.0..0.49f64) {
+            // εz = 0 in Hooke's law: σz = ν(σr + σθ) (Timoshenko & Goodier §28, from memory).
+            let b = a + w;
+            let r = a + f * w;
+            let ps = lame(pi, po, a, b, r, Ends::PlaneStrain, nu).unwrap();
+            let tol = 1e-12 * (pi + po + 1.0) * (b * b / (w * a)).max(1.0);
+            prop_assert!((ps.axial - nu * (ps.radial + ps.hoop)).abs() < tol);
+            // and εz computed by Hooke's law from the three stresses is zero.
+            let ez = ps.axial - nu * (ps.radial + ps.hoop);
+            prop_assert!(ez.abs() < tol);
+        }
+
+        #[test]
         fn lame_tends_to_the_thin_wall_hoop_stress(p in 0.1..50.0f64, r in 10.0..1000.0f64) {
             let t = r * 1e-3;
-            let thick = lame(p, 0.0, r - t / 2.0, r + t / 2.0, r, Ends::Closed).unwrap();
+            let thick = lame(p, 0.0, r - t / 2.0, r + t / 2.0, r, Ends::Closed, 0.3).unwrap();
             let thin = thin_cylinder(p, r, t, Ends::Closed, false).unwrap();
             prop_assert!((thick.hoop - thin.hoop).abs() < 1e-3 * thin.hoop);
             prop_assert!((thick.axial - thin.axial).abs() < 1e-3 * thin.axial);

@@ -113,29 +113,29 @@ pub fn App() -> impl IntoView {
         </header>
         <CautionNote/>
         <LinkNotice problem=link_problem/>
+        <StaleNotice form=form result=result shown=shown/>
         <main class="bench">
             <div class="inputs">
                 <SourcePick form=form shown=shown/>
                 <SectionLoads form=form shown=shown/>
-                <RosetteEntry form=form shown=shown/>
-                <StrainEntry form=form/>
+                <RosetteEntry form=form shown=shown stale=stale/>
+                <StrainEntry form=form shown=shown stale=stale/>
                 <StressEntry form=form shown=shown/>
-                <ElasticEntry form=form/>
+                <ElasticEntry form=form shown=shown stale=stale/>
                 <ElementTurn form=form shown=shown/>
                 <PlaneProbe form=form shown=shown/>
                 <CaseShelf form=form storage_problem=storage_problem/>
             </div>
             <div class="pictures" class:stale=move || stale.get()>
-                <StaleNotice form=form result=result/>
                 <MohrDiagram form=form shown=shown/>
                 <StressElement shown=shown/>
-                <ScanPlot form=form shown=shown/>
+                <ScanPlot form=form shown=shown stale=stale/>
                 <StrainCircle shown=shown/>
             </div>
         </main>
         <div class="decision" class:stale=move || stale.get()>
-            <Verdict form=form shown=shown/>
-            <FatigueCheck form=form shown=shown/>
+            <Verdict form=form shown=shown stale=stale/>
+            <FatigueCheck form=form shown=shown stale=stale/>
         </div>
         <ResultsPanel shown=shown stale=stale/>
         <footer class="conventions" id="conventions">
@@ -149,6 +149,20 @@ pub fn App() -> impl IntoView {
                 <li>"Strains: engineering shear γ = 2ε; rosette gauge angles counter-clockwise from x."</li>
                 <li>"Lode angle θL from cos 3θL = 3√3·J3 / (2·J2^1.5): 0° uniaxial tension, 30° pure shear, 60° uniaxial compression."</li>
             </ul>
+            <h3 id="glossary">"Symbols"</h3>
+            <dl class="glossary">
+                <dt>"σ1 ≥ σ2 ≥ σ3"</dt><dd>"principal stresses of the full 3D state"</dd>
+                <dt>"σI ≥ σII"</dt><dd>"in-plane principal stresses (faces turned about z); σI–σII is the plane of the failure envelopes"</dd>
+                <dt>"σx′, σy′, τx′y′"</dt><dd>"stresses on the element turned by θ"</dd>
+                <dt>"σh = I1/3"</dt><dd>"hydrostatic (mean) stress of the state"</dd>
+                <dt>"σvm"</dt><dd>"von Mises equivalent stress"</dd>
+                <dt>"σa,eq, σm,eq"</dt><dd>"fatigue: von Mises equivalents of the cycle's alternating and mean parts (σm,eq signed by I1)"</dd>
+                <dt>"σn, τn"</dt><dd>"normal and shear stress on the plane given by its normal n"</dd>
+                <dt>"τmax"</dt><dd>"absolute maximum shear (σ1 − σ3)/2"</dd>
+                <dt>"n"</dt><dd>"factor of safety: the factor every load can grow by before the envelope is reached"</dd>
+                <dt>"Sy, Sut, Suc, Se"</dt><dd>"yield, ultimate tensile, ultimate compressive strength, endurance limit"</dd>
+                <dt>"E, ν, α"</dt><dd>"Young's modulus, Poisson's ratio, coefficient of thermal expansion"</dd>
+            </dl>
         </footer>
     }
 }

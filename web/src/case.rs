@@ -4,12 +4,14 @@
 use crate::entry::parse_number;
 use crate::link::{check_text, Case, MAX_NOTE, MAX_TITLE};
 use crate::numfmt::format_for_entry;
-use crate::source::{self, Choices, Num, Numbers, Outcome, Quantity, Source};
+use crate::source::{
+    self, Choices, Cycle, ElasticFrom, ElasticUsed, Num, Numbers, Outcome, Quantity, Source,
+};
 use nalgebra::Vector3;
 use std::collections::BTreeMap;
 use stresscase_core::equivalent::Equivalent;
 use stresscase_core::hooke::Strain;
-use stresscase_core::invariants::{deviatoric, Invariants};
+use stresscase_core::invariants::{deviatoric, Invariants, Magnitudes};
 use stresscase_core::transform::{face_normal_about_z, rotate_about_z, InPlane, PlaneTraction};
 use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
 use stresscase_core::{
@@ -179,7 +181,11 @@ impl CaseForm {
             angle_unit: AngleUnit::Degree,
             normal: ["1".into(), "1".into(), "1".into()],
             shear_axis: ShearAxis::PositiveDown,
-            choices: Choices::default(),
+            // A new case takes E, ν and α from its material.
+            choices: Choices {
+                elastic: ElasticFrom::Material,
+                ..Choices::default()
+            },
             nums: Num::all()
                 .into_iter()
                 .map(|n| (n, n.demo_text().to_string()))
@@ -231,6 +237,32 @@ impl CaseForm {
     pub fn change_pressure_unit(&mut self, to: StressUnit) {
         self.convert_quantity(Quantity::Pressure, self.choices.pressure.convert(1.0, to));
         self.choices.pressure = to;
+    }
+
+    /// Changes how the fatigue cycle's second state is given. A typed second state means the
+    /// minimum in one mode and the amplitude in the other, so it is cleared (and asked for again)
+    /// whenever the meaning changes: the same numbers are never re-read with a new meaning.
+    pub fn set_cycle(&mut self, to: Cycle) {
+        if to != self.choices.cycle {
+            for i in 0..6 {
+                self.nums.insert(Num::Second(i), String::new());
+            }
+        }
+        self.choices.cycle = to;
+    }
+
+    /// Chooses where E, ν and α come from. Switching to typed values starts from the chosen
+    /// material's (in the modulus unit), so the numbers do not jump.
+    pub fn set_elastic(&mut self, to: ElasticFrom) {
+        if to == ElasticFrom::Typed && !self.choices.elastic_typed() {
+            if let Some(m) = self.choices.table_material() {
+                let e = StressUnit::GPa.convert(m.e, self.choices.modulus_unit);
+                self.nums.insert(Num::E, format_for_entry(e));
+                self.nums.insert(Num::Nu, format_for_entry(m.nu));
+                self.nums.insert(Num::Alpha, format_for_entry(m.alpha));
+            }
+        }
+        self.choices.elastic = to;
     }
 
     /// Changes the unit of E, converting it.
@@ -376,7 +408,7 @@ impl CaseForm {
             Field::Src(n) if n.is_optional() && self.text(field).trim().is_empty() => None,
             Field::Title => check_text(&self.title, MAX_TITLE).err().map(str::to_string),
             Field::Note => check_text(&self.note, MAX_NOTE).err().map(str::to_string),
-            _ => parse_number(self.text(field)).err().map(|e| e.to_string()),
+            _ => read_field(field, self.text(field)).err(),
         }
     }
 
@@ -429,13 +461,15 @@ impl Case {
                 self.mode,
             ),
         };
-        let (material, thermal) = source::elastic(&self.choices, self).map_err(from_source)?;
+        let elastic = source::elastic(&self.choices, self).map_err(from_source)?;
         let strain = tensor
             .scaled(self.unit.pascals())
-            .map(|t| material.strain(&t, thermal))
+            .map(|t| elastic.material.strain(&t, elastic.thermal))
             .map_err(|e| fail(Field::Sx, e))?;
         let judgement =
             crate::judge::judge(&self.choices, self, &tensor, self.unit).map_err(from_source)?;
+        let governing = crate::judge::governing(&self.choices, self, self.unit, &judgement)
+            .map_err(from_source)?;
         let theta = self.angle_unit.to_radians(angle);
         let probe = PlaneTraction::on(&tensor, Vector3::new(n[0], n[1], n[2]))
             .map_err(|e| fail(Field::Nx, e))?;
@@ -461,7 +495,9 @@ impl Case {
             choices: self.choices,
             outcome,
             strain,
+            elastic,
             judgement,
+            governing,
             shear_axis: self.shear_axis,
             tensor,
             theta,
@@ -472,6 +508,7 @@ impl Case {
             plane_mohr,
             mohr3d,
             invariants: Invariants::of(&tensor),
+            magnitudes: Magnitudes::of(&tensor),
             deviatoric,
             equivalent: Equivalent::of(&tensor),
             rotated,
@@ -480,6 +517,20 @@ impl Case {
             angle_unit: self.angle_unit,
         })
     }
+}
+
+/// Reads a number field, with the reason when it does not read. An empty component of the
+/// fatigue cycle's second state asks for it instead of suggesting a zero.
+///
+/// # Errors
+/// The reason, in words.
+pub fn read_field(field: Field, text: &str) -> Result<f64, String> {
+    parse_number(text).map_err(|e| match field {
+        Field::Src(Num::Second(_)) if text.trim().is_empty() => {
+            "not given yet: type it, or press “Take the state on screen”".to_string()
+        }
+        _ => e.to_string(),
+    })
 }
 
 fn stress_index(f: Field) -> usize {
@@ -510,8 +561,12 @@ pub struct Evaluation {
     /// The strain state of this stress by Hooke's law with the case's E, ν and α·ΔT
     /// (dimensionless, engineering shear).
     pub strain: Strain,
+    /// The elastic constants used, and where they come from.
+    pub elastic: ElasticUsed,
     /// The material's verdict on this state, and the fatigue check.
     pub judgement: crate::judge::Judgement,
+    /// Sections: where on the section the decision is hardest.
+    pub governing: Option<crate::judge::Governing>,
     /// Shear plotting convention.
     pub shear_axis: ShearAxis,
     /// The validated tensor.
@@ -528,8 +583,10 @@ pub struct Evaluation {
     pub mohr3d: Mohr3d,
     /// Plane mode only: the absolute max shear acts out of plane and exceeds the in-plane one.
     pub out_of_plane_governs: bool,
-    /// I1, I2, I3, J2, J3, σm.
+    /// I1, I2, I3, J2, J3, σh.
     pub invariants: Invariants,
+    /// I2, I3, J2, J3 in range-safe form (reported beyond double range, never as 0 or inf).
+    pub magnitudes: Magnitudes,
     /// s = σ − σm I.
     pub deviatoric: StressTensor,
     /// von Mises, Tresca, octahedral, triaxiality, Lode angle.
@@ -554,7 +611,7 @@ mod tests {
         let e = CaseForm::demo().evaluate().unwrap();
         assert_eq!(e.tensor, StressTensor::plane(84.0, -22.0, 37.0).unwrap());
         assert!(e.principal.sigma1() > 84.0);
-        assert!(!e.out_of_plane_governs); // σa > 0 > σb
+        assert!(!e.out_of_plane_governs); // σI > 0 > σII
     }
 
     #[test]

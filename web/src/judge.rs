@@ -2,11 +2,13 @@
 //! factor of safety against the required one, and the fatigue check of a cycle whose first state
 //! is the one on screen. No formula here: every number comes from `stresscase-core`.
 
-use crate::source::{Cycle, Endurance, MaterialPick, Num, Numbers, SourceProblem};
+use crate::source::{self, Cycle, Endurance, MaterialPick, Num, Numbers, Source, SourceProblem};
 use stresscase_core::criteria::{self, Criterion, Verdict};
 use stresscase_core::fatigue::{self, FatigueCriterion, FatigueError, Marin};
+use stresscase_core::invariants::mean_stress;
 use stresscase_core::material::{self, Basis, MaterialError, Strengths};
-use stresscase_core::{StressTensor, StressUnit};
+use stresscase_core::section::{Critical, Rank};
+use stresscase_core::{principal_values, StressTensor, StressUnit};
 
 use crate::source::Choices;
 
@@ -15,9 +17,9 @@ use crate::source::Choices;
 pub struct FatigueOutcome {
     /// The cycle as mean and alternating tensors.
     pub cycle: fatigue::Cycle,
-    /// von Mises alternating equivalent σa′.
+    /// von Mises alternating equivalent σa,eq.
     pub sa: f64,
-    /// von Mises mean equivalent σm′, signed by I1.
+    /// von Mises mean equivalent σm,eq, signed by I1.
     pub sm: f64,
     /// The endurance limit used.
     pub se: f64,
@@ -25,8 +27,74 @@ pub struct FatigueOutcome {
     pub estimate: Option<(f64, Marin)>,
     /// Each criterion's factor of safety (`None`: unloaded, or the material has no Sy).
     pub factors: Vec<(FatigueCriterion, Option<f64>)>,
+    /// The fatigue criterion whose factor is the verdict.
+    pub in_use: FatigueCriterion,
+    /// R = σmin/σmax of a proportional cycle; `None` when the second state is typed (then the
+    /// cycle at other points of a section is unknown).
+    pub ratio: Option<f64>,
     /// A caution about the estimate (set when the material is not a steel).
     pub caution: Option<&'static str>,
+}
+
+impl FatigueOutcome {
+    /// Whether a criterion's factor is judged (pass/fail): the one in use and the first-cycle
+    /// yield check. The others are reference figures.
+    #[must_use]
+    pub fn judged(&self, c: FatigueCriterion) -> bool {
+        c == self.in_use || c == FatigueCriterion::FirstCycleYield
+    }
+
+    /// The factor of the criterion in use (`None`: unloaded).
+    #[must_use]
+    pub fn factor_in_use(&self) -> Option<f64> {
+        self.factors
+            .iter()
+            .find(|(c, _)| *c == self.in_use)
+            .and_then(|(_, n)| *n)
+    }
+}
+
+/// Where on a section the decision is hardest: the lowest static factor under the criterion in
+/// use and, with a proportional fatigue cycle, the lowest fatigue factor. Positions as in the
+/// scan (radians, or the length unit).
+#[derive(Debug, Clone, PartialEq)]
+pub struct Governing {
+    /// The point of the lowest static factor, and that factor (`None`: unloaded everywhere).
+    pub static_point: Option<(Critical, Option<f64>)>,
+    /// The point of the lowest fatigue factor, and that factor.
+    pub fatigue_point: Option<(Critical, Option<f64>)>,
+    /// Why no fatigue point was searched for, when fatigue is on.
+    pub fatigue_note: Option<&'static str>,
+}
+
+impl Governing {
+    /// The point of the decision: of the two, the one with the lower factor (fatigue when tied).
+    #[must_use]
+    pub fn decision(&self) -> Option<&Critical> {
+        let n = |p: &Option<(Critical, Option<f64>)>| {
+            p.as_ref().map(|(_, n)| n.unwrap_or(f64::INFINITY))
+        };
+        match (&self.static_point, &self.fatigue_point) {
+            (Some((s, _)), Some((f, _))) => {
+                if n(&self.fatigue_point) <= n(&self.static_point) {
+                    Some(f)
+                } else {
+                    Some(s)
+                }
+            }
+            (Some((s, _)), None) => Some(s),
+            (None, Some((f, _))) => Some(f),
+            (None, None) => None,
+        }
+    }
+}
+
+/// Why the fatigue point is not searched for with a typed second state.
+pub const NO_FATIGUE_SEARCH: &str = "The lowest fatigue factor around the section needs a proportional cycle (R = σmin/σmax): with a typed second state, the cycle elsewhere on the section is unknown.";
+
+/// 1/n for a search (0 when unloaded), so the most severe point has the lowest factor.
+fn severity(n: Option<f64>) -> f64 {
+    n.map_or(0.0, |n| 1.0 / n)
 }
 
 /// What the case's material and stress say about the point.
@@ -58,6 +126,87 @@ impl Judgement {
     pub fn in_use_verdict(&self) -> Option<&Verdict> {
         self.verdicts.iter().find(|v| v.criterion == self.in_use)
     }
+
+    /// How severe another state (same unit) is for the static decision: f = 1/n of the
+    /// criterion in use, ties to the larger mean stress (tension governs).
+    #[must_use]
+    pub fn static_rank(&self, t: &StressTensor) -> Rank {
+        Rank {
+            severity: criteria::failure_index(self.in_use, principal_values(t), &self.strengths)
+                .unwrap_or(f64::NAN),
+            tie: mean_stress(t),
+        }
+    }
+
+    /// How severe another state is in fatigue, with the same proportional cycle (R), Se and
+    /// criterion: 1/n, ties to the larger mean equivalent. `None` without a proportional cycle.
+    #[must_use]
+    pub fn fatigue_rank(&self, t: &StressTensor) -> Option<Rank> {
+        let f = self.fatigue.as_ref()?;
+        let r = f.ratio?;
+        let s = &self.strengths;
+        let sut = s.ultimate_tensile();
+        let rank = t
+            .scaled(r)
+            .and_then(|min| fatigue::Cycle::from_extremes(t, &min))
+            .map(|cycle| {
+                let (sa, sm) = cycle.equivalents();
+                let sy = s.yield_strength().unwrap_or(sut);
+                Rank {
+                    severity: severity(fatigue::factor(f.in_use, sa, sm, f.se, sut, sy)),
+                    tie: sm,
+                }
+            });
+        Some(rank.unwrap_or(Rank {
+            severity: f64::NAN,
+            tie: 0.0,
+        }))
+    }
+}
+
+/// The governing points of a section case (`None` for other paths).
+///
+/// # Errors
+/// A refused input, attached to its number.
+pub fn governing(
+    c: &Choices,
+    n: &impl Numbers,
+    unit: StressUnit,
+    j: &Judgement,
+) -> Result<Option<Governing>, SourceProblem> {
+    if c.source != Source::Section || !c.has_loads() {
+        return Ok(None);
+    }
+    let factor = |g: Critical| {
+        let n = (g.value > 0.0)
+            .then(|| 1.0 / g.value)
+            .filter(|n| n.is_finite());
+        (g, n)
+    };
+    let static_point = if j.in_use_verdict().is_some() {
+        source::governing(c, n, unit, &|t| j.static_rank(t))?.map(factor)
+    } else {
+        None
+    };
+    let (fatigue_point, fatigue_note) = match &j.fatigue {
+        Some(f) if f.ratio.is_some() => (
+            source::governing(c, n, unit, &|t| {
+                j.fatigue_rank(t).unwrap_or(Rank {
+                    severity: f64::NAN,
+                    tie: 0.0,
+                })
+            })?
+            .map(factor),
+            None,
+        ),
+        Some(_) => (None, Some(NO_FATIGUE_SEARCH)),
+        None => (None, None),
+    };
+    Ok(Some(Governing {
+        static_point,
+        fatigue_point,
+        fatigue_note,
+    }))
 }
 
 fn problem(num: Num, message: impl Into<String>) -> SourceProblem {
@@ -186,6 +335,7 @@ fn fatigue_check(
         )
         .map_err(|_| overflow(Num::Second(0)))
     };
+    let ratio = (c.cycle == Cycle::Ratio).then(|| n.get(Num::Ratio));
     let cycle = match c.cycle {
         Cycle::Ratio => {
             let r = n.get(Num::Ratio);
@@ -265,6 +415,8 @@ fn fatigue_check(
         se,
         estimate,
         factors,
+        in_use: c.fatigue_criterion,
+        ratio,
         caution,
     })
 }

@@ -33,7 +33,6 @@
 //! a [`LinkError`] naming the problem. Nothing in a link is ever run or inserted as markup.
 
 use crate::case::{CaseForm, Field, FieldProblem, Mode};
-use crate::entry::parse_number;
 use crate::source::{
     tokens, Choices, Endurance, Layout, MaterialPick, Num, Source, ELASTIC, MAX_GAUGES,
 };
@@ -42,6 +41,7 @@ use percent_encoding::{percent_decode_str, utf8_percent_encode, AsciiSet, NON_AL
 use std::collections::BTreeMap;
 use stresscase_core::material;
 use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
+use stresscase_core::vessel::Ends;
 use stresscase_core::{AngleUnit, ShearAxis, StressUnit};
 
 /// The link version this release writes.
@@ -257,11 +257,8 @@ impl Case {
             if !form.is_active(field) {
                 return 0.0;
             }
-            parse_number(form.text(field)).unwrap_or_else(|e| {
-                problems.push(FieldProblem {
-                    field,
-                    message: e.to_string(),
-                });
+            crate::case::read_field(field, form.text(field)).unwrap_or_else(|message| {
+                problems.push(FieldProblem { field, message });
                 0.0
             })
         };
@@ -297,6 +294,11 @@ impl Case {
         }
         // A derived tensor has no typed mode or components of its own.
         let typed = form.choices.source == Source::Typed;
+        // The user's own material has no elastic constants: they are typed.
+        let mut choices = form.choices;
+        if choices.material == MaterialPick::Own {
+            choices.elastic = crate::source::ElasticFrom::Typed;
+        }
         Ok(Self {
             title: form.title.clone(),
             note: form.note.clone(),
@@ -307,7 +309,7 @@ impl Case {
             angle_unit: form.angle_unit,
             normal,
             shear_axis: form.shear_axis,
-            choices: form.choices,
+            choices,
             numbers,
         })
     }
@@ -558,9 +560,9 @@ impl Case {
 }
 
 /// Choice keys of the source paths, in link order.
-const CHOICE_KEYS: [&str; 23] = [
+const CHOICE_KEYS: [&str; 25] = [
     "src", "kind", "lu", "fu", "mu", "pu", "ends", "face", "surf", "layout", "ng", "su", "tsc",
-    "cond", "eu", "mat", "msu", "crit", "fat", "cyc", "sem", "fsurf", "fload",
+    "cond", "eu", "mat", "msu", "crit", "fat", "cyc", "sem", "fsurf", "fload", "ec", "fcrit",
 ];
 
 /// Every key a v1 link may hold.
@@ -627,6 +629,10 @@ fn choice_pairs(c: &Choices) -> Vec<(&'static str, String)> {
     if c.material == MaterialPick::Own || (c.fatigue && c.endurance == Endurance::Given) {
         v.push(("msu", c.strength_unit.symbol().into()));
     }
+    // Written for a built-in material (absent: typed, the meaning of links before this key).
+    if c.material != MaterialPick::Own {
+        v.push(("ec", tokens::token(&tokens::ELASTIC_FROM, c.elastic).into()));
+    }
     v.push((
         "crit",
         tokens::token(&tokens::CRITERION, c.criterion).into(),
@@ -639,6 +645,10 @@ fn choice_pairs(c: &Choices) -> Vec<(&'static str, String)> {
             v.push(("fsurf", tokens::token(&tokens::FINISH, c.finish).into()));
             v.push(("fload", tokens::token(&tokens::LOADING, c.loading).into()));
         }
+        v.push((
+            "fcrit",
+            tokens::token(&tokens::FATIGUE_CRITERION, c.fatigue_criterion).into(),
+        ));
     }
     v
 }
@@ -713,7 +723,13 @@ fn read_choices<'a>(take: &impl Fn(&'static str) -> Option<&'a str>) -> Result<C
             stress_units,
             d.pressure,
         )?,
-        ends: pick("ends", take("ends"), &tokens::ENDS, "closed, open", d.ends)?,
+        ends: pick(
+            "ends",
+            take("ends"),
+            &tokens::ENDS,
+            "closed, open, pstrain",
+            d.ends,
+        )?,
         face: pick(
             "face",
             take("face"),
@@ -839,7 +855,28 @@ fn read_choices<'a>(take: &impl Fn(&'static str) -> Option<&'a str>) -> Result<C
             "bending, axial, torsion",
             d.loading,
         )?,
+        elastic: pick(
+            "ec",
+            take("ec"),
+            &tokens::ELASTIC_FROM,
+            "mat, typed",
+            d.elastic,
+        )?,
+        fatigue_criterion: pick(
+            "fcrit",
+            take("fcrit"),
+            &tokens::FATIGUE_CRITERION,
+            "goodman, gerber, asme, soderberg",
+            d.fatigue_criterion,
+        )?,
     };
+    if c.ends == Ends::PlaneStrain && c.kind == crate::source::SectionKind::ThinCylinder {
+        return Err(LinkError::BadChoice(
+            "ends",
+            "pstrain".into(),
+            "closed, open (plane strain is for Lamé cylinders: tube, shaft)",
+        ));
+    }
     let used = choice_pairs(&c);
     let src = tokens::token(&tokens::SOURCE, c.source);
     for key in CHOICE_KEYS {
@@ -997,7 +1034,14 @@ mod tests {
                 0usize..6,
             ),
             (any::<bool>(), 0usize..4, any::<bool>(), 0usize..3, 3u8..=8),
-            (any::<bool>(), any::<bool>(), 0usize..3, 0usize..6),
+            (
+                any::<bool>(),
+                any::<bool>(),
+                0usize..3,
+                0usize..6,
+                any::<bool>(),
+                0usize..4,
+            ),
             (
                 0usize..=material::TABLE.len(),
                 0usize..6,
@@ -1013,7 +1057,7 @@ mod tests {
                 |(
                     (src, kind, lu, fu, mu, pu),
                     (ends, face, surf, layout, ng),
-                    (su, tsc, cond, eu),
+                    (su, tsc, cond, eu, ec, fcrit),
                     (mat, msu, crit, fat, cyc, sem, fin, load),
                 )| {
                     Choices {
@@ -1023,7 +1067,11 @@ mod tests {
                         force: ForceUnit::ALL[fu],
                         moment: MomentUnit::ALL[mu],
                         pressure: StressUnit::ALL[pu],
-                        ends: if ends { Ends::Closed } else { Ends::Open },
+                        ends: if ends {
+                            Ends::Closed
+                        } else {
+                            Ends::PlaneStrain
+                        },
                         face: [Face::PosY, Face::PosZ, Face::NegY, Face::NegZ][face],
                         surface: if surf { Surface::Inner } else { Surface::Outer },
                         layout: [Layout::Rectangular, Layout::Delta, Layout::Custom][layout],
@@ -1052,6 +1100,8 @@ mod tests {
                         endurance: tokens::ENDURANCE[usize::from(sem)].0,
                         finish: tokens::FINISH[fin].0,
                         loading: tokens::LOADING[load].0,
+                        elastic: tokens::ELASTIC_FROM[usize::from(ec)].0,
+                        fatigue_criterion: tokens::FATIGUE_CRITERION[fcrit].0,
                     }
                 },
             )
@@ -1112,6 +1162,15 @@ mod tests {
                 }
                 if !used.contains(&"fload") {
                     c.loading = d.loading;
+                }
+                if !used.contains(&"ec") {
+                    c.elastic = d.elastic;
+                }
+                if !used.contains(&"fcrit") {
+                    c.fatigue_criterion = d.fatigue_criterion;
+                }
+                if c.kind == crate::source::SectionKind::ThinCylinder {
+                    c.ends = Ends::Closed;
                 }
                 c
             })

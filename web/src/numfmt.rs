@@ -34,6 +34,13 @@ pub fn format_sig(v: f64, sig: usize) -> String {
     out.replace('-', "−")
 }
 
+/// A number beyond double range given as `mantissa`·10^`exponent`, in the same notation.
+#[must_use]
+pub fn format_decimal_power(mantissa: f64, exponent: i32, sig: usize) -> String {
+    let m = format_sig(mantissa, sig);
+    format!("{m} × 10{}", superscript(exponent))
+}
+
 fn superscript(n: i32) -> String {
     n.to_string()
         .chars()

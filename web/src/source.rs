@@ -4,12 +4,13 @@
 //! No formula here: every number comes from `stresscase-core`.
 
 use stresscase_core::criteria::Criterion;
-use stresscase_core::fatigue::{Loading, Surface as FatSurface};
+use stresscase_core::fatigue::{FatigueCriterion, Loading, Surface as FatSurface};
 use stresscase_core::hooke::{Elastic, ElasticError, Strain};
+use stresscase_core::material;
 use stresscase_core::rosette::{self, Gauge, RosetteError, RosetteStrain, Transverse};
 use stresscase_core::section::{
-    Concentration, Face, Loads, Location, Path, Pressure, Properties, Rectangle, Round, Scan,
-    Section, SectionError, SAINT_VENANT,
+    Concentration, Critical, Face, Loads, Location, Path, Pressure, Properties, Rank, Rectangle,
+    Round, Scan, Section, SectionError, SAINT_VENANT,
 };
 use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
 use stresscase_core::vessel::{self, Ends, VesselError};
@@ -79,6 +80,17 @@ pub enum Condition {
     Full,
 }
 
+/// Where the elastic constants E, ν and α come from.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum ElasticFrom {
+    /// The chosen built-in material's E, ν and α (the user's own material has none: typed).
+    Material,
+    /// Typed by the user. The default when a link says nothing (links written before the
+    /// material supplied them carry their E, ν and α, or mean 200 GPa, 0.3 and 12 µε/K).
+    #[default]
+    Typed,
+}
+
 /// Most gauges a rosette may have on the page.
 pub const MAX_GAUGES: u8 = 8;
 
@@ -115,6 +127,8 @@ pub struct Choices {
     pub condition: Condition,
     /// Unit of Young's modulus.
     pub modulus_unit: StressUnit,
+    /// Where E, ν and α come from.
+    pub elastic: ElasticFrom,
     /// The material: a built-in row (index into `material::TABLE`) or the user's own.
     pub material: MaterialPick,
     /// Unit of the user's strengths and of a given endurance limit.
@@ -131,6 +145,9 @@ pub struct Choices {
     pub finish: FatSurface,
     /// Loading for kb and kc.
     pub loading: Loading,
+    /// The fatigue criterion whose factor is the fatigue verdict (first-cycle yield is always
+    /// judged beside it).
+    pub fatigue_criterion: FatigueCriterion,
 }
 
 /// The material of the case.
@@ -182,6 +199,7 @@ impl Default for Choices {
             correct: false,
             condition: Condition::PlaneStress,
             modulus_unit: StressUnit::GPa,
+            elastic: ElasticFrom::Typed,
             material: MaterialPick::Table(0),
             strength_unit: StressUnit::MPa,
             criterion: None,
@@ -190,6 +208,7 @@ impl Default for Choices {
             endurance: Endurance::Estimate,
             finish: FatSurface::Machined,
             loading: Loading::Bending,
+            fatigue_criterion: FatigueCriterion::Goodman,
         }
     }
 }
@@ -651,7 +670,8 @@ impl Num {
             Num::MatElong => "22",
             Num::Required => "2",
             Num::Ratio => "-1",
-            Num::Second(i) => ["-20", "8", "0", "5", "0", "0"][usize::from(i.min(5))],
+            // Never invented: the second state is typed or taken from the screen.
+            Num::Second(_) => "",
             Num::Se => "160",
             Num::FatD => "40",
             Num::FatTemp => "20",
@@ -660,7 +680,8 @@ impl Num {
     }
 }
 
-/// The elastic constants every case carries.
+/// The elastic constants every case carries (E, ν and α only when typed; see
+/// [`Choices::elastic_typed`]).
 pub const ELASTIC: [Num; 4] = [Num::E, Num::Nu, Num::Alpha, Num::DeltaT];
 
 impl Choices {
@@ -676,7 +697,10 @@ impl Choices {
                 _ => vec![Num::Ex, Num::Ey, Num::Gxy],
             },
         };
-        v.extend(ELASTIC);
+        if self.elastic_typed() {
+            v.extend([Num::E, Num::Nu, Num::Alpha]);
+        }
+        v.push(Num::DeltaT);
         v.push(Num::Required);
         if self.material == MaterialPick::Own {
             v.extend([Num::MatSy, Num::MatSut, Num::MatSuc, Num::MatElong]);
@@ -716,6 +740,22 @@ impl Choices {
         }
     }
 
+    /// Whether E, ν and α are typed: chosen so, or the material is the user's own (which has
+    /// no elastic constants of its own).
+    #[must_use]
+    pub fn elastic_typed(&self) -> bool {
+        self.elastic == ElasticFrom::Typed || self.material == MaterialPick::Own
+    }
+
+    /// The built-in material row, if one is chosen.
+    #[must_use]
+    pub fn table_material(&self) -> Option<&'static material::TableMaterial> {
+        match self.material {
+            MaterialPick::Table(i) => material::TABLE.get(i),
+            MaterialPick::Own => None,
+        }
+    }
+
     /// Gauges in use.
     #[must_use]
     pub fn gauge_count(&self) -> u8 {
@@ -751,9 +791,9 @@ impl Choices {
 
 /// Token tables for the choices, shared by the link writer and reader and the page's selects.
 pub mod tokens {
-    use super::{Condition, Cycle, Endurance, Layout, SectionKind, Source, Surface};
+    use super::{Condition, Cycle, ElasticFrom, Endurance, Layout, SectionKind, Source, Surface};
     use stresscase_core::criteria::Criterion;
-    use stresscase_core::fatigue::{Loading, Surface as FatSurface};
+    use stresscase_core::fatigue::{FatigueCriterion, Loading, Surface as FatSurface};
     use stresscase_core::section::Face;
     use stresscase_core::vessel::Ends;
 
@@ -772,8 +812,24 @@ pub mod tokens {
         (SectionKind::ThinCylinder, "thincyl"),
         (SectionKind::ThinSphere, "thinsph"),
     ];
-    /// `ends`.
-    pub const ENDS: [(Ends, &str); 2] = [(Ends::Closed, "closed"), (Ends::Open, "open")];
+    /// `ends` (plane strain only for Lamé cylinders: tube and solid shaft).
+    pub const ENDS: [(Ends, &str); 3] = [
+        (Ends::Closed, "closed"),
+        (Ends::Open, "open"),
+        (Ends::PlaneStrain, "pstrain"),
+    ];
+    /// `ec`: where E, ν and α come from.
+    pub const ELASTIC_FROM: [(ElasticFrom, &str); 2] = [
+        (ElasticFrom::Material, "mat"),
+        (ElasticFrom::Typed, "typed"),
+    ];
+    /// `fcrit`: the fatigue criterion in use.
+    pub const FATIGUE_CRITERION: [(FatigueCriterion, &str); 4] = [
+        (FatigueCriterion::Goodman, "goodman"),
+        (FatigueCriterion::Gerber, "gerber"),
+        (FatigueCriterion::AsmeElliptic, "asme"),
+        (FatigueCriterion::Soderberg, "soderberg"),
+    ];
     /// `face`.
     pub const FACE: [(Face, &str); 4] = [
         (Face::PosY, "+y"),
@@ -911,17 +967,81 @@ pub enum Outcome {
     Strain(StrainOutcome),
 }
 
-/// The elastic constants as core types: the material (E in Pa) and α·ΔT.
+/// The elastic constants in use, and where they come from.
+#[derive(Debug, Clone, PartialEq)]
+pub struct ElasticUsed {
+    /// As core's type (E in Pa).
+    pub material: Elastic,
+    /// E in the case's modulus unit.
+    pub e: f64,
+    /// Poisson's ratio.
+    pub nu: f64,
+    /// Coefficient of expansion, µε/K.
+    pub alpha: f64,
+    /// Free thermal strain α·ΔT (dimensionless).
+    pub thermal: f64,
+    /// The material they come from; `None` when typed.
+    pub from: Option<&'static str>,
+    /// The warning shown when typed values differ from the chosen material's by more than
+    /// [`ELASTIC_MISMATCH`].
+    pub mismatch: Option<String>,
+}
+
+/// Relative difference of a typed E or ν from the chosen material's above which the page warns.
+pub const ELASTIC_MISMATCH: f64 = 0.05;
+
+/// The elastic constants of the case: the chosen material's E, ν and α, or the typed ones (with a
+/// warning when they differ from the chosen material's by more than 5 %).
 ///
 /// # Errors
 /// The refused constant, attached to its field.
-pub fn elastic(c: &Choices, n: &impl Numbers) -> Result<(Elastic, f64), SourceProblem> {
-    let e = n.get(Num::E) * c.modulus_unit.pascals();
-    let m = Elastic::try_new(e, n.get(Num::Nu)).map_err(|err| match err {
+pub fn elastic(c: &Choices, n: &impl Numbers) -> Result<ElasticUsed, SourceProblem> {
+    let row = c.table_material();
+    let (e, nu, alpha, from) = match row {
+        Some(m) if !c.elastic_typed() => (
+            StressUnit::GPa.convert(m.e, c.modulus_unit),
+            m.nu,
+            m.alpha,
+            Some(m.name),
+        ),
+        _ => (n.get(Num::E), n.get(Num::Nu), n.get(Num::Alpha), None),
+    };
+    let material = Elastic::try_new(e * c.modulus_unit.pascals(), nu).map_err(|err| match err {
         ElasticError::Modulus(_) => problem(Num::E, "E must be a positive number"),
         ElasticError::Poisson(_) => problem(Num::Nu, err.to_string()),
     })?;
-    Ok((m, n.get(Num::Alpha) * 1e-6 * n.get(Num::DeltaT)))
+    if !alpha.is_finite() {
+        return Err(problem(Num::Alpha, "α must be a finite number"));
+    }
+    let mismatch = match row {
+        Some(m) if from.is_none() => {
+            let e_gpa = c.modulus_unit.convert(e, StressUnit::GPa);
+            let de = (e_gpa / m.e - 1.0).abs();
+            let dnu = (nu / m.nu - 1.0).abs();
+            (de > ELASTIC_MISMATCH || dnu > ELASTIC_MISMATCH).then(|| {
+                format!(
+                    "The typed E = {} GPa and ν = {} differ from {}'s E = {} GPa and ν = {} by {} % and {} %. Stresses from strains and the strain state use the typed values.",
+                    crate::numfmt::format_sig(e_gpa, 4),
+                    crate::numfmt::format_sig(nu, 3),
+                    m.name,
+                    crate::numfmt::format_sig(m.e, 4),
+                    crate::numfmt::format_sig(m.nu, 3),
+                    crate::numfmt::format_sig(100.0 * de, 2),
+                    crate::numfmt::format_sig(100.0 * dnu, 2),
+                )
+            })
+        }
+        _ => None,
+    };
+    Ok(ElasticUsed {
+        material,
+        e,
+        nu,
+        alpha,
+        thermal: alpha * 1e-6 * n.get(Num::DeltaT),
+        from,
+        mismatch,
+    })
 }
 
 fn section_problem(e: SectionError, c: &Choices) -> SourceProblem {
@@ -955,6 +1075,9 @@ fn vessel_problem(e: VesselError) -> SourceProblem {
     };
     problem(num, message)
 }
+
+/// Printed with plane-strain ends: the assumption and where its ν comes from.
+pub const PLANE_STRAIN_ENDS: &str = "Plane-strain ends: the member is taken as axially restrained (εz = 0), so the pressure adds σz = ν(σr + σθ), with ν from the elastic constants shown.";
 
 /// Points sampled on each scan path.
 pub const SCAN_SAMPLES: usize = 72;
@@ -1032,7 +1155,7 @@ pub fn section(c: &Choices, n: &impl Numbers) -> Result<Section, SourceProblem> 
 }
 
 /// Loads, pressure and factors in SI.
-fn section_loads(c: &Choices, n: &impl Numbers) -> (Loads, Pressure, Concentration) {
+fn section_loads(c: &Choices, n: &impl Numbers, nu: f64) -> (Loads, Pressure, Concentration) {
     let f = c.force.newtons();
     let mm = c.moment.newton_metres();
     let p = c.pressure.pascals();
@@ -1049,11 +1172,13 @@ fn section_loads(c: &Choices, n: &impl Numbers) -> (Loads, Pressure, Concentrati
             inner: 0.0,
             outer: n.get(Num::Pout) * p,
             ends: c.ends,
+            nu,
         },
         SectionKind::Tube => Pressure {
             inner: n.get(Num::Pin) * p,
             outer: n.get(Num::Pout) * p,
             ends: c.ends,
+            nu,
         },
         _ => Pressure::NONE,
     };
@@ -1103,7 +1228,7 @@ pub fn evaluate(
                 return thin_vessel(c, n, unit).map(Some);
             }
             let s = section(c, n)?;
-            let (loads, pressure, k) = section_loads(c, n);
+            let (loads, pressure, k) = section_loads(c, n, elastic(c, n)?.nu);
             let at = point(c, n, angle);
             let tensor = s
                 .stress_at(&loads, &pressure, k, at)
@@ -1113,7 +1238,10 @@ pub fn evaluate(
             let scan = s
                 .scan(&loads, &pressure, k, SCAN_SAMPLES)
                 .map_err(|e| section_problem(e, c))?;
-            let warnings = vec![SAINT_VENANT];
+            let mut warnings = vec![SAINT_VENANT];
+            if c.ends == Ends::PlaneStrain && (pressure.inner != 0.0 || pressure.outer != 0.0) {
+                warnings.push(PLANE_STRAIN_ENDS);
+            }
             Ok(Some((
                 tensor,
                 Outcome::Section(SectionOutcome {
@@ -1125,7 +1253,7 @@ pub fn evaluate(
             )))
         }
         Source::Rosette => {
-            let (material, _) = elastic(c, n)?;
+            let material = elastic(c, n)?.material;
             let s = c.strain_unit.factor();
             let gauges: Vec<Gauge> = (0..c.gauge_count())
                 .map(|i| Gauge {
@@ -1160,7 +1288,9 @@ pub fn evaluate(
             )))
         }
         Source::Strain => {
-            let (material, thermal) = elastic(c, n)?;
+            let ElasticUsed {
+                material, thermal, ..
+            } = elastic(c, n)?;
             let s = c.strain_unit.factor();
             let (ex, ey, gxy) = (n.get(Num::Ex) * s, n.get(Num::Ey) * s, n.get(Num::Gxy) * s);
             let (tensor, strain) = match c.condition {
@@ -1213,11 +1343,63 @@ pub fn evaluate(
     }
 }
 
+/// The point of the section where `rank` (given the tensor in `unit`) is most severe, found by
+/// core's search over the same samples as the scan; positions as in the scan (radians, or the
+/// length unit). `Ok(None)` for paths without a section.
+///
+/// # Errors
+/// A refused input, attached to its number.
+pub fn governing(
+    c: &Choices,
+    n: &impl Numbers,
+    unit: StressUnit,
+    rank: &dyn Fn(&StressTensor) -> Rank,
+) -> Result<Option<Critical>, SourceProblem> {
+    if c.source != Source::Section || !c.has_loads() {
+        return Ok(None);
+    }
+    let s = section(c, n)?;
+    let (loads, pressure, k) = section_loads(c, n, elastic(c, n)?.nu);
+    let to_unit = 1.0 / unit.pascals();
+    let in_unit = |t: &StressTensor| match t.scaled(to_unit) {
+        Ok(t) => rank(&t),
+        Err(_) => Rank {
+            severity: f64::NAN,
+            tie: 0.0,
+        },
+    };
+    let mut g = s
+        .governing(&loads, &pressure, k, SCAN_SAMPLES, &in_unit)
+        .map_err(|e| section_problem(e, c))?;
+    let l = 1.0 / c.length.metres();
+    g.at = location_in(g.at, l);
+    if matches!(g.at, Location::Rectangle { .. }) {
+        g.position *= l;
+        // The search leaves noise of about 1e-12 of the section at a mid-face.
+        if let Location::Rectangle { face, along } = g.at {
+            let size = match s {
+                Section::Rectangle(r) => r.depth().max(r.width()) * l,
+                Section::Round(_) => 1.0,
+            };
+            if along.abs() < 1e-9 * size {
+                g.at = Location::Rectangle { face, along: 0.0 };
+            }
+        }
+    }
+    Ok(Some(g))
+}
+
 fn thin_vessel(
     c: &Choices,
     n: &impl Numbers,
     unit: StressUnit,
 ) -> Result<(StressTensor, Outcome), SourceProblem> {
+    if c.ends == Ends::PlaneStrain && c.kind == SectionKind::ThinCylinder {
+        return Err(problem(
+            Num::Pin,
+            "plane-strain ends apply to Lamé cylinders (tube, solid shaft); a thin cylinder has closed or open ends",
+        ));
+    }
     let m = c.length.metres();
     let (r, t) = (0.5 * n.get(Num::D) * m, n.get(Num::Wall) * m);
     let p = n.get(Num::Pin) * c.pressure.pascals();

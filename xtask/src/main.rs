@@ -289,6 +289,8 @@ fn test() -> Result {
             "page_sources",
             "--test",
             "page_decision",
+            "--test",
+            "page_trust",
             "--",
             "--ignored",
             "--test-threads=2",

@@ -1,25 +1,81 @@
-//! "Elastic constants": E, ν and the free thermal strain α·ΔT, used for rosettes, for strains,
-//! and for the strain state shown with every case.
+//! "Elastic constants": where E, ν and α come from (the chosen material, or typed), the values
+//! used, the free thermal strain α·ΔT, and a warning when typed values differ from the chosen
+//! material's. [`ElasticNote`] repeats the values used beside the gauge and strain inputs.
 
-use crate::case::CaseForm;
+use crate::case::{CaseForm, Evaluation};
+use crate::numfmt::format_for_entry;
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::number_field::SourceFields;
-use crate::source::ELASTIC;
+use crate::source::{tokens, ElasticUsed, MaterialPick, Num};
 use leptos::prelude::*;
 use stresscase_core::StressUnit;
 
+/// "E = 68.9 GPa, ν = 0.33, α = 23.6 µε/K — from Aluminium alloy 6061-T6" (or "— typed"), the
+/// numbers as the table or the user wrote them.
+#[must_use]
+pub fn describe(e: &ElasticUsed, modulus_unit: StressUnit) -> String {
+    format!(
+        "E = {} {}, ν = {}, α = {} µε/K — {}",
+        format_for_entry(e.e),
+        modulus_unit.symbol(),
+        format_for_entry(e.nu),
+        format_for_entry(e.alpha),
+        e.from
+            .map_or_else(|| "typed".to_string(), |m| format!("from {m}")),
+    )
+}
+
+/// The line that says which E, ν and α turn strains into stress, and where they come from.
+#[component]
+pub fn ElasticNote(
+    shown: Memo<Option<Evaluation>>,
+    stale: Memo<bool>,
+    id: &'static str,
+) -> impl IntoView {
+    let text = move || {
+        shown.with(|e| {
+            e.as_ref().map(|e| {
+                format!(
+                    "Hooke's law with {}.",
+                    describe(&e.elastic, e.choices.modulus_unit)
+                )
+            })
+        })
+    };
+    let mismatch = move || shown.with(|e| e.as_ref().and_then(|e| e.elastic.mismatch.clone()));
+    view! {
+        <p class="elastic-note" id=id class:stale=move || stale.get()>{text}</p>
+        {move || mismatch().map(|m| view! { <p class="warnings mismatch" role="note">{m}</p> })}
+    }
+}
+
 /// The panel.
 #[component]
-pub fn ElasticEntry(form: RwSignal<CaseForm>) -> impl IntoView {
+pub fn ElasticEntry(
+    form: RwSignal<CaseForm>,
+    shown: Memo<Option<Evaluation>>,
+    stale: Memo<bool>,
+) -> impl IntoView {
+    let own = Memo::new(move |_| form.with(|f| f.choices.material == MaterialPick::Own));
+    let typed = Memo::new(move |_| form.with(|f| f.choices.elastic_typed()));
     view! {
         <fieldset class="panel" id="panel-elastic">
             <legend>"Elastic constants (isotropic)"</legend>
-            <ChoiceSelect form=form id="modulus-unit" label="E in"
-                options=StressUnit::ALL.iter().map(|u| (u.symbol(), u.symbol())).collect()
-                get=|f| f.choices.modulus_unit.symbol()
-                set=|f, v| if let Some(u) = StressUnit::from_symbol(v) { f.change_modulus_unit(u); }/>
-            <SourceFields form=form nums=ELASTIC.to_vec()/>
-            <p class="hint">"The defaults are round values typical of steel (common practice), not a material's data. E > 0 and −1 < ν < 0.5."</p>
+            <div hidden=move || own.get()>
+                <ChoiceSelect form=form id="elastic-from" label="E, ν and α"
+                    options=vec![("mat", "from the material chosen under “Will it hold?”"), ("typed", "typed below")]
+                    get=|f| tokens::token(&tokens::ELASTIC_FROM, f.choices.elastic)
+                    set=|f, v| if let Some(x) = tokens::value(&tokens::ELASTIC_FROM, v) { f.set_elastic(x); }/>
+            </div>
+            <div hidden=move || !typed.get()>
+                <ChoiceSelect form=form id="modulus-unit" label="E in"
+                    options=StressUnit::ALL.iter().map(|u| (u.symbol(), u.symbol())).collect()
+                    get=|f| f.choices.modulus_unit.symbol()
+                    set=|f, v| if let Some(u) = StressUnit::from_symbol(v) { f.change_modulus_unit(u); }/>
+            </div>
+            <SourceFields form=form nums=vec![Num::E, Num::Nu, Num::Alpha, Num::DeltaT]/>
+            <ElasticNote shown=shown stale=stale id="elastic-source"/>
+            <p class="hint">"They turn gauge readings and strains into stress, and every stress into the strain state shown with the results. Your own material has no elastic constants: type them. E > 0 and −1 < ν < 0.5."</p>
         </fieldset>
     }
 }

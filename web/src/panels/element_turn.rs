@@ -15,6 +15,9 @@ pub fn ElementTurn(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) ->
             form.update(|f| f.set_angle_radians(pick(&e)));
         }
     };
+    // With an isotropic in-plane state every face is principal: there is no face to jump to.
+    let isotropic =
+        Memo::new(move |_| shown.with(|e| e.as_ref().is_some_and(|e| e.in_plane.isotropic)));
     // The slider spans a half turn either way in the current unit.
     let span = move || form.with(|f| f.angle_unit.from_radians(core::f64::consts::PI));
     let step = move || {
@@ -49,11 +52,12 @@ pub fn ElementTurn(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) ->
                 prop:value=move || form.with(|f| parse_number(&f.angle).map(|v| v.to_string()).unwrap_or_default())
                 on:input:target=move |ev| form.update(|f| f.angle = ev.target().value())/>
             <div class="buttons">
-                <button type="button" id="to-principal" on:click=move |_| jump(|e| e.in_plane.theta_p)>"To principal face θp"</button>
-                <button type="button" id="to-shear" on:click=move |_| jump(|e| e.in_plane.theta_s)>"To max in-plane shear face θs"</button>
+                <button type="button" id="to-principal" prop:disabled=move || isotropic.get() on:click=move |_| jump(|e| e.in_plane.theta_p)>"To principal face θp"</button>
+                <button type="button" id="to-shear" prop:disabled=move || isotropic.get() on:click=move |_| jump(|e| e.in_plane.theta_s)>"To max in-plane shear face θs"</button>
                 <button type="button" id="to-zero" on:click=move |_| form.update(|f| f.angle = "0".into())>"Back to x, y"</button>
             </div>
             <p class="hint">"θ turns x′ counter-clockwise from x (z out of the page)."</p>
+            <p class="hint" id="isotropic-note" hidden=move || !isotropic.get()>"σx = σy and τxy = 0: the state is isotropic in the plane, so every direction is principal (any direction) and no in-plane face carries shear."</p>
         </fieldset>
     }
 }

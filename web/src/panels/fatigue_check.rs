@@ -8,6 +8,7 @@ use crate::judge::{FatigueOutcome, Judgement};
 use crate::numfmt::{format_for_entry, format_sig, RESULT_DIGITS};
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::number_field::SourceFields;
+use crate::panels::stale_notice::StaleBadge;
 use crate::plot::nice_ticks;
 use crate::source::{tokens, Cycle, Endurance, Num};
 use leptos::prelude::*;
@@ -29,7 +30,7 @@ pub type Ticks = Vec<(f64, String)>;
 pub struct Picture {
     /// (criterion key, SVG points) of each envelope, the yield line included.
     pub lines: Vec<(&'static str, String)>,
-    /// The operating point (σm′, σa′) in pixels.
+    /// The operating point (σm,eq, σa,eq) in pixels.
     pub point: (f64, f64),
     /// The load line from the origin through the point to the frame, in pixels.
     pub load: [f64; 4],
@@ -131,7 +132,11 @@ fn take_second(f: &mut CaseForm, e: &Evaluation) {
 
 /// The panel.
 #[component]
-pub fn FatigueCheck(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
+pub fn FatigueCheck(
+    form: RwSignal<CaseForm>,
+    shown: Memo<Option<Evaluation>>,
+    stale: Memo<bool>,
+) -> impl IntoView {
     let on = Memo::new(move |_| form.with(|f| f.choices.fatigue));
     let data = Memo::new(move |_| {
         shown.with(|e| {
@@ -155,8 +160,8 @@ pub fn FatigueCheck(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                     .into_any()
                 };
                 let mut v = vec![
-                    row("fat_sa", "alternating von Mises σa′".into(), f.sa, u),
-                    row("fat_sm", "mean von Mises σm′ (sign of I1)".into(), f.sm, u),
+                    row("fat_sa", "alternating equivalent σa,eq (von Mises)".into(), f.sa, u),
+                    row("fat_sm", "mean equivalent σm,eq (von Mises, sign of I1)".into(), f.sm, u),
                     row("fat_se", "endurance limit Se used".into(), f.se, u),
                 ];
                 if let Some((se0, m)) = f.estimate {
@@ -175,13 +180,23 @@ pub fn FatigueCheck(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                         FatigueCriterion::Soderberg => "nf_soderberg",
                         FatigueCriterion::FirstCycleYield => "nf_langer",
                     };
+                    let judged = f.judged(*c);
                     let pass = n.is_none_or(|n| n >= j.required);
                     let text = n.map_or_else(
                         || if j.strengths.yield_strength().is_none() && !matches!(c, FatigueCriterion::Goodman | FatigueCriterion::Gerber) { "needs Sy".to_string() } else { "∞ (unloaded)".to_string() },
-                        |n| format!("{} — {}", format_sig(n, RESULT_DIGITS), if pass { "passes" } else { "FAILS" }),
+                        |n| if judged {
+                            format!("{} — {}", format_sig(n, RESULT_DIGITS), if pass { "passes" } else { "FAILS" })
+                        } else {
+                            format!("{} (reference only)", format_sig(n, RESULT_DIGITS))
+                        },
                     );
+                    let label = if *c == f.in_use {
+                        format!("n, {} (in use)", c.name())
+                    } else {
+                        format!("n, {}", c.name())
+                    };
                     v.push(view! {
-                        <tr class:fails=!pass><th scope="row">{format!("n, {}", c.name())}</th>
+                        <tr class:fails=judged && !pass class:reference=!judged class:in-use=*c == f.in_use data-judged=if judged { "true" } else { "false" }><th scope="row">{label}</th>
                         <td class="num" data-key=key data-value=n.map(|n| format!("{n:e}")).unwrap_or_default()>{text}</td></tr>
                     }.into_any());
                 }
@@ -208,14 +223,14 @@ pub fn FatigueCheck(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                         {tm}{ta}{lines}
                         <line class="load-line" x1=p.load[0] y1=p.load[1] x2=p.load[2] y2=p.load[3]/>
                         <circle class="stress-point" id="fatigue-point" cx=p.point.0 cy=p.point.1 r="5"/>
-                        <text class="axis-label" x=W - RIGHT y=H - 8.0 text-anchor="end">{format!("mean σm′ ({u})")}</text>
-                        <text class="axis-label" x=LEFT + 4.0 y=TOP + 12.0>{format!("alternating σa′ ({u})")}</text>
+                        <text class="axis-label" x=W - RIGHT y=H - 8.0 text-anchor="end">{format!("mean σm,eq ({u})")}</text>
+                        <text class="axis-label" x=LEFT + 4.0 y=TOP + 12.0>{format!("alternating σa,eq ({u})")}</text>
                     </svg>
                     <ul class="legend">
                         <li class="key goodman">"modified Goodman"</li><li class="key gerber">"Gerber"</li>
                         <li class="key asme">"ASME-elliptic"</li><li class="key soderberg">"Soderberg"</li>
-                        <li class="key langer">"first-cycle yield σa + σm = Sy"</li>
-                        <li class="key load">"load line through the origin (σa/σm fixed as the loads grow)"</li>
+                        <li class="key langer">"first-cycle yield σa,eq + σm,eq = Sy"</li>
+                        <li class="key load">"load line through the origin (σa,eq/σm,eq fixed as the loads grow)"</li>
                     </ul>
                 }
             })
@@ -223,7 +238,7 @@ pub fn FatigueCheck(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
     };
     view! {
         <section class="panel fatigue" id="panel-fatigue">
-            <h2>"Fatigue"</h2>
+            <h2>"Fatigue"<StaleBadge stale=stale/></h2>
             <label class="check">
                 <input type="checkbox" id="fatigue-on" prop:checked=move || on.get()
                     on:change:target=move |ev| form.update(|f| f.choices.fatigue = ev.target().checked())/>
@@ -234,14 +249,14 @@ pub fn FatigueCheck(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                     <ChoiceSelect form=form id="cycle-kind" label="Cycle"
                         options=vec![("ratio", "the state on screen is the maximum; minimum = R × maximum"), ("min", "the state on screen is the maximum; the minimum below"), ("alt", "the state on screen is the mean; the alternating amplitude below")]
                         get=|f| tokens::token(&tokens::CYCLE, f.choices.cycle)
-                        set=|f, v| if let Some(c) = tokens::value(&tokens::CYCLE, v) { f.choices.cycle = c; }/>
+                        set=|f, v| if let Some(c) = tokens::value(&tokens::CYCLE, v) { f.set_cycle(c); }/>
                     <SourceFields form=form nums=vec![Num::Ratio]/>
                     <div hidden=move || form.with(|f| f.choices.cycle == Cycle::Ratio)>
                         <SourceFields form=form nums=(0..6).map(Num::Second).collect()/>
                         <div class="buttons">
                             <button type="button" id="take-second" on:click=move |_| shown.with_untracked(|e| if let Some(e) = e { form.update(|f| take_second(f, e)); })>"Take the state on screen"</button>
                         </div>
-                        <p class="hint">"Components in the case's stress unit, in the same axes as the state on screen. Set the loads of the other extreme, take that state, then set the loads back."</p>
+                        <p class="hint" id="second-state-hint">"Components in the case's stress unit, in the same axes as the state on screen. Nothing is filled in for you: set the loads of the other extreme, press “Take the state on screen”, then set the loads back — or type the components. Changing between minimum and amplitude clears them, because the same numbers mean something else."</p>
                     </div>
                     <ChoiceSelect form=form id="endurance-kind" label="Endurance limit"
                         options=vec![("estimate", "estimate for a steel: Se′ = 0.5 Sut with Marin factors"), ("given", "given (corrected for the part)")]
@@ -264,9 +279,13 @@ pub fn FatigueCheck(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                             set=|f, v| if let Some(u) = StressUnit::from_symbol(v) { f.change_strength_unit(u); }/>
                     </div>
                     <SourceFields form=form nums=vec![Num::Se, Num::FatD, Num::FatTemp, Num::FatRel]/>
-                    <table class="result-group fatigue-results"><tbody>{rows}</tbody></table>
+                    <ChoiceSelect form=form id="fatigue-criterion" label="Fatigue criterion in use"
+                        options=vec![("goodman", "modified Goodman"), ("gerber", "Gerber"), ("asme", "ASME-elliptic"), ("soderberg", "Soderberg")]
+                        get=|f| tokens::token(&tokens::FATIGUE_CRITERION, f.choices.fatigue_criterion)
+                        set=|f, v| if let Some(x) = tokens::value(&tokens::FATIGUE_CRITERION, v) { f.choices.fatigue_criterion = x; }/>
+                    <table class="result-group fatigue-results" id="fatigue-table" class:stale=move || stale.get()><tbody>{rows}</tbody></table>
                     <p class="warnings">{caution}</p>
-                    <p class="hint">"Factors use the load line through the origin. A compressive mean (σm′ < 0) is taken as not helping: n = Se/σa′. Marin factors and Se′ are Shigley's correlations (ch. 6); the size factor is for rotating round sections."</p>
+                    <p class="hint">"The criterion in use and first-cycle yield are judged; the other criteria are reference figures. Factors use the load line through the origin. A compressive mean (σm,eq < 0) is taken as not helping: n = Se/σa,eq. Marin factors and Se′ are Shigley's correlations (ch. 6); the size factor is for rotating round sections."</p>
                 </div>
                 <figure class="fatigue-plot">{diagram}</figure>
             </div>

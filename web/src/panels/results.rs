@@ -2,10 +2,11 @@
 //! carries `data-key` and the unrounded `data-value` (in the case's unit) for tests and copying.
 
 use crate::case::{Evaluation, Mode};
-use crate::numfmt::{format_sig, RESULT_DIGITS};
+use crate::numfmt::{format_decimal_power, format_sig, RESULT_DIGITS};
 use crate::source::Outcome;
 use leptos::prelude::*;
 use nalgebra::Vector3;
+use stresscase_core::invariants::Magnitude;
 use stresscase_core::section::{Face, Location};
 use stresscase_core::units::LengthUnit;
 use stresscase_core::AngleUnit;
@@ -21,6 +22,8 @@ pub struct Row {
     pub value: Option<f64>,
     /// The text shown, unit included.
     pub text: String,
+    /// The exact value as text where it is not an f64 (beyond double range, e.g. `6e450`).
+    pub raw: Option<String>,
 }
 
 /// A titled group of rows.
@@ -43,6 +46,29 @@ fn num(key: &'static str, label: impl Into<String>, v: f64, unit: &str) -> Row {
         label: label.into(),
         value: Some(v),
         text,
+        raw: None,
+    }
+}
+
+/// A value that may lie beyond double range: shown as m × 10ⁿ with a note, never 0 or ∞.
+fn magnitude(key: &'static str, label: &str, m: Magnitude, unit: &str) -> Row {
+    match m {
+        Magnitude::Finite(v) => num(key, label, v, unit),
+        Magnitude::OutOfRange {
+            mantissa,
+            exponent,
+            overflow,
+        } => Row {
+            key,
+            label: label.into(),
+            value: None,
+            text: format!(
+                "{} {unit} ({} double range: shown as computed on the scaled tensor)",
+                format_decimal_power(mantissa, exponent, RESULT_DIGITS),
+                if overflow { "above" } else { "below" }
+            ),
+            raw: Some(format!("{mantissa}e{exponent}")),
+        },
     }
 }
 
@@ -57,6 +83,7 @@ fn angle(key: &'static str, label: impl Into<String>, radians: f64, unit: AngleU
         label: label.into(),
         value: Some(v),
         text,
+        raw: None,
     }
 }
 
@@ -66,6 +93,28 @@ fn text(key: &'static str, label: impl Into<String>, t: String) -> Row {
         label: label.into(),
         value: None,
         text: t,
+        raw: None,
+    }
+}
+
+/// An in-plane principal angle, or "any direction" when the in-plane state is isotropic.
+fn principal_angle(
+    key: &'static str,
+    label: &str,
+    radians: f64,
+    isotropic: bool,
+    unit: AngleUnit,
+) -> Row {
+    if isotropic {
+        let mut r = text(
+            key,
+            label,
+            "any direction (isotropic in the plane: every direction is principal)".into(),
+        );
+        r.raw = Some("any".into());
+        r
+    } else {
+        angle(key, label, radians, unit)
     }
 }
 
@@ -123,17 +172,23 @@ pub fn groups(e: &Evaluation) -> Vec<Group> {
     };
     principal.push(num(
         "sigma_a",
-        format!("σa, larger {in_plane_title}"),
+        format!("σI, larger {in_plane_title}"),
         ip.sigma_a,
         u,
     ));
     principal.push(num(
         "sigma_b",
-        format!("σb, smaller {in_plane_title}"),
+        format!("σII, smaller {in_plane_title}"),
         ip.sigma_b,
         u,
     ));
-    principal.push(angle("theta_p", "θp, x to the σa face", ip.theta_p, au));
+    principal.push(principal_angle(
+        "theta_p",
+        "θp, x to the σI face",
+        ip.theta_p,
+        ip.isotropic,
+        au,
+    ));
 
     let mut shear = vec![
         num(
@@ -159,10 +214,11 @@ pub fn groups(e: &Evaluation) -> Vec<Group> {
             ip.radius,
             u,
         ),
-        angle(
+        principal_angle(
             "theta_s",
             "θs, x to the face with τx′y′ = +max",
             ip.theta_s,
+            ip.isotropic,
             au,
         ),
     ];
@@ -202,8 +258,8 @@ pub fn groups(e: &Evaluation) -> Vec<Group> {
         ),
         num("oct_shear", "octahedral shear τoct", eq.octahedral_shear, u),
         match eq.triaxiality {
-            Some(t) => num("triaxiality", "triaxiality η = σm/σvm", t, ""),
-            None => text("triaxiality", "triaxiality η = σm/σvm", none()),
+            Some(t) => num("triaxiality", "triaxiality η = σh/σvm", t, ""),
+            None => text("triaxiality", "triaxiality η = σh/σvm", none()),
         },
         match eq.lode_angle {
             Some(a) => angle("lode", "Lode angle θL", a, au),
@@ -213,11 +269,11 @@ pub fn groups(e: &Evaluation) -> Vec<Group> {
 
     let invariants = vec![
         num("i1", "I1", inv.i1, u),
-        num("i2", "I2", inv.i2, &u2),
-        num("i3", "I3", inv.i3, &u3),
-        num("j2", "J2", inv.j2, &u2),
-        num("j3", "J3", inv.j3, &u3),
-        num("mean", "mean stress σm", inv.mean, u),
+        magnitude("i2", "I2", e.magnitudes.i2, &u2),
+        magnitude("i3", "I3", e.magnitudes.i3, &u3),
+        magnitude("j2", "J2", e.magnitudes.j2, &u2),
+        magnitude("j3", "J3", e.magnitudes.j3, &u3),
+        num("mean", "hydrostatic (mean) stress σh = I1/3", inv.mean, u),
         text(
             "deviatoric",
             "deviator sx, sy, sz, sxy, syz, szx",
@@ -343,10 +399,11 @@ fn source_groups(e: &Evaluation) -> Vec<Group> {
                     s.principal[1] * k,
                     su.symbol(),
                 ),
-                angle(
+                principal_angle(
                     "ros_theta_p",
                     "θp, x to the ε1 direction",
                     s.theta_p,
+                    s.isotropic,
                     e.angle_unit,
                 ),
                 num(
@@ -421,6 +478,46 @@ fn source_groups(e: &Evaluation) -> Vec<Group> {
                     ));
                 }
             }
+            if let Some(g) = &e.governing {
+                let j = &e.judgement;
+                let factor_text = |n: Option<f64>| {
+                    n.map_or_else(
+                        || "∞ (unloaded)".to_string(),
+                        |n| format_sig(n, RESULT_DIGITS),
+                    )
+                };
+                if let Some((at, n)) = &g.static_point {
+                    let mut r = text(
+                        "gov_static",
+                        format!("lowest static factor on the section ({})", j.in_use.name()),
+                        factor_text(*n),
+                    );
+                    r.raw = n.map(|n| format!("{n:e}"));
+                    rows.push(r);
+                    rows.push(text(
+                        "gov_static_at",
+                        "  at",
+                        location_text(at.at, lu, e.angle_unit),
+                    ));
+                }
+                if let (Some((at, n)), Some(f)) = (&g.fatigue_point, &j.fatigue) {
+                    let mut r = text(
+                        "gov_fatigue",
+                        format!("lowest fatigue factor on the section ({})", f.in_use.name()),
+                        factor_text(*n),
+                    );
+                    r.raw = n.map(|n| format!("{n:e}"));
+                    rows.push(r);
+                    rows.push(text(
+                        "gov_fatigue_at",
+                        "  at",
+                        location_text(at.at, lu, e.angle_unit),
+                    ));
+                }
+                if let Some(note) = g.fatigue_note {
+                    rows.push(text("gov_note", "note", note.to_string()));
+                }
+            }
             if let Some([outer, inner]) = s.vessel_surfaces {
                 rows.push(num("vm_outer", "von Mises at the outer surface", outer, u));
                 rows.push(num(
@@ -487,7 +584,7 @@ pub fn ResultsPanel(shown: Memo<Option<Evaluation>>, stale: Memo<bool>) -> impl 
                             .rows
                             .into_iter()
                             .map(|r| {
-                                let raw = r.value.map(|v| format!("{v:e}")).unwrap_or_default();
+                                let raw = r.raw.clone().or_else(|| r.value.map(|v| format!("{v:e}"))).unwrap_or_default();
                                 view! {
                                     <tr>
                                         <th scope="row">{r.label}</th>
@@ -507,9 +604,11 @@ pub fn ResultsPanel(shown: Memo<Option<Evaluation>>, stale: Memo<bool>) -> impl 
             })
         })
     };
+    let mismatch = move || shown.with(|e| e.as_ref().and_then(|e| e.elastic.mismatch.clone()));
     view! {
         <section class="panel results" id="panel-results" class:stale=move || stale.get()>
             <h2>"Results" {move || stale.get().then_some(" — stale, last valid input")}</h2>
+            {move || mismatch().map(|m| view! { <p class="warnings mismatch" id="elastic-mismatch" role="note"><strong>"E and ν: "</strong>{m}</p> })}
             <div class="result-grid">{content}</div>
         </section>
     }

@@ -4,6 +4,7 @@
 use crate::case::{CaseForm, Evaluation};
 use crate::numfmt::format_sig;
 use crate::panels::choice_select::ChoiceSelect;
+use crate::panels::elastic_entry::ElasticNote;
 use crate::panels::number_field::SourceFields;
 use crate::source::{tokens, Num, Outcome, Source, MAX_GAUGES};
 use leptos::prelude::*;
@@ -56,7 +57,11 @@ pub fn sketch(gauges: &[Gauge], au: AngleUnit) -> Vec<GaugeMark> {
 
 /// The panel (shown when the stress comes from a rosette).
 #[component]
-pub fn RosetteEntry(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
+pub fn RosetteEntry(
+    form: RwSignal<CaseForm>,
+    shown: Memo<Option<Evaluation>>,
+    stale: Memo<bool>,
+) -> impl IntoView {
     let on = Memo::new(move |_| form.with(|f| f.choices.source == Source::Rosette));
     let custom =
         Memo::new(move |_| form.with(|f| f.choices.layout == crate::source::Layout::Custom));
@@ -114,7 +119,8 @@ pub fn RosetteEntry(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                             </g>
                         }).collect_view()}
                     </svg>
-                    <p class="hint">"Gauge angles are measured counter-clockwise from x towards y, as sketched. Readings are taken as temperature-compensated; the stresses use plane-stress Hooke's law with E and ν below. With four or more gauges the fit is least squares and each gauge's residual is listed in the results: a large one points at a bad gauge or a non-uniform field."</p>
+                    <ElasticNote shown=shown stale=stale id="elastic-used"/>
+                    <p class="hint">"Gauge angles are measured counter-clockwise from x towards y, as sketched. Readings are taken as temperature-compensated; the stresses use plane-stress Hooke's law with the E and ν above. With four or more gauges the fit is least squares and each gauge's residual is listed in the results: a large one points at a bad gauge or a non-uniform field."</p>
                 </fieldset>
             }
         })

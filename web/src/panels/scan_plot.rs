@@ -6,7 +6,10 @@
 //! it. The `<svg>` carries the highest values as `data-max-vm` and `data-max-s1` (case unit).
 
 use crate::case::{CaseForm, Evaluation, Field};
+use crate::judge::Governing;
 use crate::numfmt::{format_for_entry, format_sig};
+use crate::panels::results::location_text;
+use crate::panels::stale_notice::StaleBadge;
 use crate::plot::nice_ticks;
 use crate::source::{self, Num, Outcome, SectionKind, Source};
 use leptos::prelude::*;
@@ -61,6 +64,8 @@ pub struct Picture {
     pub x_title: String,
     /// y-axis title.
     pub y_title: String,
+    /// The position at the right end of the axis (2π, or the perimeter).
+    pub x_max: f64,
 }
 
 /// Builds the plot. Stresses are in the case's unit `unit`; round positions are radians shown in
@@ -176,6 +181,7 @@ pub fn picture(
         faces: Vec::new(),
         x_title,
         y_title: format!("stress ({unit})"),
+        x_max,
     }
 }
 
@@ -225,7 +231,11 @@ fn use_point(form: &mut CaseForm, at: Location) {
 
 /// The plot panel (only for sections with a scan).
 #[component]
-pub fn ScanPlot(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
+pub fn ScanPlot(
+    form: RwSignal<CaseForm>,
+    shown: Memo<Option<Evaluation>>,
+    stale: Memo<bool>,
+) -> impl IntoView {
     let scan = Memo::new(move |_| {
         shown.with(|e| {
             e.as_ref().and_then(|e| match &e.outcome {
@@ -234,6 +244,21 @@ pub fn ScanPlot(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> im
                     .clone()
                     .map(|scan| (scan, e.unit, e.angle_unit, e.choices.length)),
                 _ => None,
+            })
+        })
+    });
+    let governing = Memo::new(move |_| {
+        shown.with(|e| {
+            e.as_ref().and_then(|e| {
+                let g = e.governing.clone()?;
+                let fatigue = e.judgement.fatigue.as_ref().map(|f| f.in_use.name());
+                Some((
+                    g,
+                    e.judgement.in_use.name(),
+                    fatigue,
+                    e.choices.length,
+                    e.angle_unit,
+                ))
             })
         })
     });
@@ -274,6 +299,62 @@ pub fn ScanPlot(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> im
             form.update(|f| use_point(f, pick(&scan)));
         }
     };
+    let go_governing = move |pick: fn(&Governing) -> Option<Location>| {
+        if let Some(at) = governing.with_untracked(|g| g.as_ref().and_then(|(g, ..)| pick(g))) {
+            form.update(|f| use_point(f, at));
+        }
+    };
+    // Positions on the plot's axis of the governing points (static, fatigue).
+    let governing_x = move || {
+        governing.with(|g| {
+            g.as_ref()
+                .map(|(g, ..)| {
+                    (
+                        g.static_point.as_ref().map(|(c, _)| c.position),
+                        g.fatigue_point.as_ref().map(|(c, _)| c.position),
+                    )
+                })
+                .unwrap_or_default()
+        })
+    };
+    let governing_text = move || {
+        governing.with(|g| {
+            g.as_ref().map(|(g, crit, fcrit, lu, au)| {
+                let n = |n: &Option<f64>| {
+                    n.map_or_else(|| "∞ (unloaded)".to_string(), |n| format_sig(n, 3))
+                };
+                let mut parts = Vec::new();
+                if let Some((c, f)) = &g.static_point {
+                    parts.push(format!(
+                        "Lowest static factor, {crit}: n = {} at {}.",
+                        n(f),
+                        location_text(c.at, *lu, *au)
+                    ));
+                }
+                if let (Some((c, f)), Some(fc)) = (&g.fatigue_point, fcrit) {
+                    parts.push(format!(
+                        "Lowest fatigue factor, {fc}: n = {} at {}.",
+                        n(f),
+                        location_text(c.at, *lu, *au)
+                    ));
+                }
+                if let Some(note) = g.fatigue_note {
+                    parts.push(note.to_string());
+                }
+                parts.push("Equal factors go to the point with the tensile mean stress.".into());
+                parts.join(" ")
+            })
+        })
+    };
+    let both = move || {
+        governing.with(|g| {
+            g.as_ref()
+                .is_some_and(|(g, ..)| match (&g.static_point, &g.fatigue_point) {
+                    (Some((a, _)), Some((b, _))) => a.at != b.at,
+                    _ => false,
+                })
+        })
+    };
     move || {
         pic.get().map(|(p, max_vm, max_s1)| {
             let lines = p.lines.iter().map(|l| view! { <polyline class=format!("curve {}", l.class) points=l.points.clone()/> }).collect_view();
@@ -293,14 +374,41 @@ pub fn ScanPlot(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> im
                 <g class="face-mark"><line x1=*x x2=*x y1=TOP y2=H - BOTTOM/><text x=x + 3.0 y=TOP + 10.0>{*name}</text></g>
             }).collect_view();
             let chosen = p.chosen.map(|x| view! { <line class="chosen" id="scan-chosen" x1=x x2=x y1=TOP y2=H - BOTTOM/> });
+            let to_px = |pos: f64| LEFT + (W - LEFT - RIGHT) * pos / p.x_max;
+            let (gs, gf) = governing_x();
+            // One line per distinct point, labelled just above the axis (clear of the maxima).
+            let same = matches!((gs, gf), (Some(a), Some(b)) if (a - b).abs() < 1e-9 * p.x_max);
+            let marks: Vec<(f64, &str, &str)> = if same {
+                gs.map(|x| (x, "gov-static", "lowest n: static and fatigue")).into_iter().collect()
+            } else {
+                [(gs, "gov-static", "lowest n, static"), (gf, "gov-fatigue", "lowest n, fatigue")]
+                    .into_iter()
+                    .filter_map(|(pos, id, label)| pos.map(|pos| (pos, id, label)))
+                    .collect()
+            };
+            let gov = marks
+                .into_iter()
+                .enumerate()
+                .map(|(i, (pos, id, label))| {
+                    let x = to_px(pos);
+                    let right = x < W - 140.0;
+                    view! {
+                        <g class=format!("governing {id}") id=format!("scan-{id}")>
+                            <line x1=x x2=x y1=TOP y2=H - BOTTOM/>
+                            <text x=if right { x + 4.0 } else { x - 4.0 } y=H - BOTTOM - 6.0 - 14.0 * i as f64
+                                text-anchor=if right { "start" } else { "end" }>{label}</text>
+                        </g>
+                    }
+                })
+                .collect_view();
             view! {
                 <figure class="panel scan-plot" id="panel-scan">
-                    <h2>"Around the section"</h2>
+                    <h2>"Around the section"<StaleBadge stale=stale/></h2>
                     <svg id="scan-svg" viewBox=format!("0 0 {W} {H}") role="img"
                         aria-label="von Mises and largest principal stress around the section"
                         data-max-vm=format!("{max_vm:e}") data-max-s1=format!("{max_s1:e}")>
                         <rect class="plot-bg" x=LEFT y=TOP width=W - LEFT - RIGHT height=H - TOP - BOTTOM/>
-                        {yt}{xt}{faces}{lines}{chosen}{markers}
+                        {yt}{xt}{faces}{lines}{chosen}{gov}{markers}
                         <text class="axis-label" x=(LEFT + W - RIGHT) / 2.0 y=H - 6.0 text-anchor="middle">{p.x_title.clone()}</text>
                         <text class="axis-label" x="14" y=(TOP + H - BOTTOM) / 2.0 transform=format!("rotate(-90 14 {})", (TOP + H - BOTTOM) / 2.0) text-anchor="middle">{p.y_title.clone()}</text>
                     </svg>
@@ -308,9 +416,14 @@ pub fn ScanPlot(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> im
                         <span class="key vm">"— von Mises"</span>" "
                         <span class="key s1">"- - largest principal σ1"</span>" "
                         <span class="key bore">"(lighter: the bore)"</span>" "
-                        <span class="key chosen">"| the chosen point"</span>
+                        <span class="key chosen">"| the chosen point"</span>" "
+                        <span class="key governing">"¦ lowest factor of safety"</span>
                     </figcaption>
+                    <p class="governing-note" id="governing-note" class:stale=move || stale.get()>{governing_text}</p>
                     <div class="buttons">
+                        <button type="button" id="to-governing" on:click=move |_| go_governing(|g| g.decision().map(|c| c.at))>"Move the point to where the factor of safety is lowest"</button>
+                        <button type="button" id="to-governing-static" hidden=move || !both() on:click=move |_| go_governing(|g| g.static_point.as_ref().map(|(c, _)| c.at))>"… lowest static factor"</button>
+                        <button type="button" id="to-governing-fatigue" hidden=move || !both() on:click=move |_| go_governing(|g| g.fatigue_point.as_ref().map(|(c, _)| c.at))>"… lowest fatigue factor"</button>
                         <button type="button" id="use-max-vm" on:click=move |_| go(|s| s.max_von_mises.at)>"Move the point to the highest von Mises"</button>
                         <button type="button" id="use-max-s1" on:click=move |_| go(|s| s.max_principal.at)>"Move the point to the highest σ1"</button>
                     </div>

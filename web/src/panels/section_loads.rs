@@ -64,7 +64,13 @@ pub fn SectionLoads(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                     <legend>"Loads on a section"</legend>
                     <ChoiceSelect form=form id="section-kind" label="Section" options=kinds.clone()
                         get=|f| tokens::token(&tokens::KIND, f.choices.kind)
-                        set=|f, v| if let Some(k) = tokens::value(&tokens::KIND, v) { f.choices.kind = k; }/>
+                        set=|f, v| if let Some(k) = tokens::value(&tokens::KIND, v) {
+                            f.choices.kind = k;
+                            // Thin cylinders have closed or open ends only.
+                            if k == SectionKind::ThinCylinder && f.choices.ends == Ends::PlaneStrain {
+                                f.choices.ends = Ends::Closed;
+                            }
+                        }/>
                     <div class="unit-row">
                         <ChoiceSelect form=form id="length-unit" label="lengths in"
                             options=LengthUnit::ALL.iter().map(|u| (u.symbol(), u.symbol())).collect()
@@ -99,9 +105,15 @@ pub fn SectionLoads(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                     })}
                     {(k != SectionKind::ThinSphere && k != SectionKind::Rectangle).then(|| view! {
                         <ChoiceSelect form=form id="ends" label="Ends"
-                            options=vec![("closed", "closed: the wall carries the pressure end load"), ("open", "open: no axial stress from pressure")]
+                            options={
+                                let mut o = vec![("closed", "closed: the wall carries the pressure end load"), ("open", "open: no axial stress from pressure")];
+                                if k != SectionKind::ThinCylinder {
+                                    o.push(("pstrain", "plane strain: axially restrained, σz = ν(σr + σθ)"));
+                                }
+                                o
+                            }
                             get=|f| tokens::token(&tokens::ENDS, f.choices.ends)
-                            set=|f, v| f.choices.ends = if v == "open" { Ends::Open } else { Ends::Closed }/>
+                            set=|f, v| if let Some(e) = tokens::value(&tokens::ENDS, v) { f.choices.ends = e; }/>
                     })}
                     {(!thin).then(|| view! {
                         <h3>"Stress concentration at the point"</h3>

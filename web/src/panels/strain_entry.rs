@@ -1,8 +1,9 @@
 //! "Strains (Hooke's law)": a strain state — measured, or from another analysis — turned into
 //! stress under plane stress, plane strain or in full 3D.
 
-use crate::case::CaseForm;
+use crate::case::{CaseForm, Evaluation};
 use crate::panels::choice_select::ChoiceSelect;
+use crate::panels::elastic_entry::ElasticNote;
 use crate::panels::number_field::SourceFields;
 use crate::source::{tokens, Num, Source};
 use leptos::prelude::*;
@@ -10,7 +11,11 @@ use stresscase_core::units::StrainUnit;
 
 /// The panel (shown when the stress comes from strains).
 #[component]
-pub fn StrainEntry(form: RwSignal<CaseForm>) -> impl IntoView {
+pub fn StrainEntry(
+    form: RwSignal<CaseForm>,
+    shown: Memo<Option<Evaluation>>,
+    stale: Memo<bool>,
+) -> impl IntoView {
     let on = Memo::new(move |_| form.with(|f| f.choices.source == Source::Strain));
     move || {
         on.get().then(|| view! {
@@ -25,6 +30,7 @@ pub fn StrainEntry(form: RwSignal<CaseForm>) -> impl IntoView {
                     get=|f| f.choices.strain_unit.token()
                     set=|f, v| if let Some(u) = StrainUnit::from_token(v) { f.change_strain_unit(u); }/>
                 <SourceFields form=form nums=vec![Num::Ex, Num::Ey, Num::Ez, Num::Gxy, Num::Gyz, Num::Gzx]/>
+                <ElasticNote shown=shown stale=stale id="elastic-used"/>
                 <p class="hint">"Shear strains are engineering shear strains γ = 2ε (γ = τ/G). Total strains: the free thermal strain α·ΔT below is taken off before Hooke's law."</p>
             </fieldset>
         })

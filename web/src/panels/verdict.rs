@@ -10,10 +10,11 @@ use crate::judge::Judgement;
 use crate::numfmt::{format_for_entry, format_sig, RESULT_DIGITS};
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::number_field::SourceFields;
+use crate::panels::stale_notice::StaleBadge;
 use crate::plot::{nice_ticks, Frame, Viewport};
-use crate::source::{tokens, MaterialPick, Num};
+use crate::source::{tokens, ElasticFrom, MaterialPick, Num};
 use leptos::prelude::*;
-use stresscase_core::criteria::{self, Criterion};
+use stresscase_core::criteria::{self, Criterion, MohrBranch};
 use stresscase_core::material::{self, Basis};
 use stresscase_core::StressUnit;
 
@@ -122,18 +123,9 @@ fn edit_as_own(f: &mut CaseForm) {
             f.set_text(Field::Src(Num::MatSut), format_for_entry(m.sut));
             f.set_text(Field::Src(Num::MatSuc), opt(m.suc));
             f.set_text(Field::Src(Num::MatElong), format_for_entry(m.elongation));
+            // Its E, ν and α become typed values, so nothing the case computes changes.
+            f.set_elastic(ElasticFrom::Typed);
             f.choices.material = MaterialPick::Own;
-        }
-    }
-}
-
-/// Sets the case's elastic constants to the built-in row's E and ν.
-fn use_elastic(f: &mut CaseForm) {
-    if let MaterialPick::Table(i) = f.choices.material {
-        if let Some(m) = material::TABLE.get(i) {
-            f.change_modulus_unit(StressUnit::GPa);
-            f.set_text(Field::Src(Num::E), format_for_entry(m.e));
-            f.set_text(Field::Src(Num::Nu), format_for_entry(m.nu));
         }
     }
 }
@@ -147,20 +139,30 @@ fn material_options() -> Vec<(&'static str, &'static str)> {
 
 /// The panel.
 #[component]
-pub fn Verdict(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
+pub fn Verdict(
+    form: RwSignal<CaseForm>,
+    shown: Memo<Option<Evaluation>>,
+    stale: Memo<bool>,
+) -> impl IntoView {
     let own = Memo::new(move |_| form.with(|f| f.choices.material == MaterialPick::Own));
     let data = Memo::new(move |_| {
         shown.with(|e| {
             e.as_ref().map(|e| {
                 let plane =
                     (e.mode == Mode::Plane).then_some((e.in_plane.sigma_a, e.in_plane.sigma_b));
-                (e.judgement.clone(), e.unit, picture(&e.judgement, plane))
+                let branch = MohrBranch::of(e.principal.values());
+                (
+                    e.judgement.clone(),
+                    e.unit,
+                    picture(&e.judgement, plane),
+                    branch,
+                )
             })
         })
     });
     let about = move || {
         data.with(|d| {
-            d.as_ref().map(|(j, u, _)| {
+            d.as_ref().map(|(j, u, _, _)| {
                 let u = u.symbol();
                 let s = &j.strengths;
                 let fmt = |v: Option<f64>| {
@@ -186,7 +188,7 @@ pub fn Verdict(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> imp
     };
     let table = move || {
         data.with(|d| {
-            d.as_ref().map(|(j, _, _)| {
+            d.as_ref().map(|(j, _, _, branch)| {
                 j.verdicts
                     .iter()
                     .map(|v| {
@@ -196,8 +198,16 @@ pub fn Verdict(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> imp
                             || "∞ (unloaded)".to_string(),
                             |n| format_sig(n, RESULT_DIGITS),
                         );
-                        let verdict = if v.passes { "passes" } else { "FAILS" };
-                        let margin = v.margin.map_or_else(String::new, |m| {
+                        // Judged: it applies to the material, or the user chose it.
+                        let judged = v.judged || v.criterion == j.in_use;
+                        let verdict = if !judged {
+                            "reference only"
+                        } else if v.passes {
+                            "passes"
+                        } else {
+                            "FAILS"
+                        };
+                        let margin = v.margin.filter(|_| judged).map_or_else(String::new, |m| {
                             format!(
                                 "{}{} %",
                                 if m >= 0.0 { "+" } else { "" },
@@ -208,9 +218,25 @@ pub fn Verdict(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> imp
                         if v.criterion == j.suggested {
                             note.push_str(" (suggested)");
                         }
+                        if !v.judged {
+                            note.push_str(if j.strengths.is_ductile() {
+                                " — a brittle-material criterion; this material is ductile"
+                            } else {
+                                " — a ductile-material criterion; this material is brittle"
+                            });
+                        }
+                        let mut assumptions: Vec<&str> =
+                            criteria::assumption(v.criterion, &j.strengths).into_iter().collect();
+                        if v.criterion == Criterion::ModifiedMohr {
+                            assumptions.push(branch.describe());
+                        }
+                        let assumption_text = assumptions.join("; ");
                         view! {
-                            <tr class:in-use=v.criterion == j.in_use class:fails=!v.passes>
-                                <th scope="row">{v.criterion.name()}{note}</th>
+                            <tr class:in-use=v.criterion == j.in_use class:fails=judged && !v.passes class:reference=!judged
+                                data-criterion=v.criterion.key() data-judged=if judged { "true" } else { "false" }>
+                                <th scope="row">{v.criterion.name()}{note}
+                                    {(!assumption_text.is_empty()).then(|| view! { <span class="assumption">{assumption_text.clone()}</span> })}
+                                </th>
                                 <td class="num" data-key=key data-value=raw>{n_text}</td>
                                 <td class="verdict">{verdict}</td>
                                 <td class="num">{margin}</td>
@@ -223,7 +249,7 @@ pub fn Verdict(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> imp
     };
     let headline = move || {
         data.with(|d| {
-            d.as_ref().map(|(j, _, _)| match j.in_use_verdict() {
+            d.as_ref().map(|(j, _, _, _)| match j.in_use_verdict() {
                 Some(v) => {
                     let n = v.factor.map_or_else(|| "∞".into(), |n| format_sig(n, 3));
                     format!(
@@ -243,7 +269,7 @@ pub fn Verdict(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> imp
     };
     let plot = move || {
         data.with(|d| {
-            d.as_ref().map(|(j, u, p)| {
+            d.as_ref().map(|(j, u, p, _)| {
                 let u = u.symbol();
                 let (ox, oy) = (p.view.x(0.0), p.view.y(0.0));
                 let lines = p.envelopes.iter().map(|l| view! {
@@ -269,8 +295,8 @@ pub fn Verdict(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> imp
                         <line class="axis" x1=FRAME.left x2=FRAME.left + FRAME.width y1=oy y2=oy/>
                         <line class="axis" x1=ox x2=ox y1=FRAME.top y2=FRAME.top + FRAME.height/>
                         {ticks}{lines}{load}{point}
-                        <text class="axis-label" x=FRAME.left + FRAME.width - 4.0 y=oy - 6.0 text-anchor="end">{format!("σA ({u})")}</text>
-                        <text class="axis-label" x=ox + 6.0 y=FRAME.top + 12.0>{format!("σB ({u})")}</text>
+                        <text class="axis-label" x=FRAME.left + FRAME.width - 4.0 y=oy - 6.0 text-anchor="end">{format!("σI ({u})")}</text>
+                        <text class="axis-label" x=ox + 6.0 y=FRAME.top + 12.0>{format!("σII ({u})")}</text>
                     </svg>
                     <ul class="legend">{legend}<li class="key load">"— load line: every stress scaled by n reaches the envelope in use"</li></ul>
                     <p class="hint">{note}</p>
@@ -280,7 +306,7 @@ pub fn Verdict(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> imp
     };
     view! {
         <section class="panel verdict" id="panel-verdict">
-            <h2>"Will it hold?"</h2>
+            <h2>"Will it hold?"<StaleBadge stale=stale/></h2>
             <div class="verdict-grid">
                 <div class="verdict-inputs">
                     <ChoiceSelect form=form id="material" label="Material" options=material_options()
@@ -289,7 +315,6 @@ pub fn Verdict(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> imp
                     <p class="material-about" id="material-about">{about}</p>
                     <div class="buttons" hidden=move || own.get()>
                         <button type="button" id="edit-material" on:click=move |_| form.update(edit_as_own)>"Edit as my own material"</button>
-                        <button type="button" id="use-elastic" on:click=move |_| form.update(use_elastic)>"Use its E and ν"</button>
                     </div>
                     <div hidden=move || !own.get()>
                         <ChoiceSelect form=form id="strength-unit" label="strengths in"
@@ -303,12 +328,12 @@ pub fn Verdict(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> imp
                         options=vec![("auto", "as the material suggests (ductile: von Mises; brittle: modified Mohr)"), ("vm", "von Mises"), ("tresca", "Tresca"), ("normal", "maximum normal stress"), ("cm", "Coulomb–Mohr"), ("mm", "modified Mohr")]
                         get=|f| tokens::token(&tokens::CRITERION, f.choices.criterion)
                         set=|f, v| if let Some(c) = tokens::value(&tokens::CRITERION, v) { f.choices.criterion = c; }/>
-                    <p class="headline" id="verdict-headline">{headline}</p>
-                    <table class="result-group criteria">
+                    <p class="headline" id="verdict-headline" class:stale=move || stale.get()>{headline}</p>
+                    <table class="result-group criteria" id="criteria-table" class:stale=move || stale.get()>
                         <thead><tr><th>"criterion"</th><th>"n"</th><th>"verdict"</th><th>"margin"</th></tr></thead>
                         <tbody>{table}</tbody>
                     </table>
-                    <p class="hint">"n is the factor by which every load (so every stress) can grow before the envelope is reached. Ductile means elongation of 5 % or more (common practice)."</p>
+                    <p class="hint">"n is the factor by which every load (so every stress) can grow before the envelope is reached. Only the criteria for the material's kind are judged (ductile: von Mises, Tresca; brittle: maximum normal, Coulomb–Mohr, modified Mohr); the others are reference figures. Ductile means elongation of 5 % or more (common practice)."</p>
                 </div>
                 <figure class="envelope-plot">{plot}</figure>
             </div>
@@ -349,6 +374,8 @@ mod tests {
         for (a, b) in before.iter().zip(&after) {
             assert_eq!(a.factor, b.factor);
         }
-        use_elastic(&mut f);
+        // Its elastic constants became typed values equal to the row's.
+        let e = f.evaluate().unwrap();
+        assert!(e.elastic.from.is_none() && e.elastic.mismatch.is_none());
     }
 }
