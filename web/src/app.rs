@@ -127,10 +127,10 @@ pub fn App() -> impl IntoView {
                 <CaseShelf form=form storage_problem=storage_problem/>
             </div>
             <div class="pictures" class:stale=move || stale.get()>
-                <MohrDiagram form=form shown=shown/>
-                <StressElement shown=shown/>
+                <MohrDiagram form=form shown=shown stale=stale/>
+                <StressElement shown=shown stale=stale/>
                 <ScanPlot form=form shown=shown stale=stale/>
-                <StrainCircle shown=shown/>
+                <StrainCircle shown=shown stale=stale/>
             </div>
         </main>
         <div class="decision" class:stale=move || stale.get()>

@@ -476,4 +476,70 @@ mod tests {
         assert!((goodman - f.se / f.sa).abs() < 1e-12);
         assert!(f.estimate.is_some() && f.caution.is_none());
     }
+
+    #[test]
+    fn the_decision_point_is_the_one_with_the_lower_factor() {
+        use stresscase_core::section::Location;
+        let at = |phi: f64, severity: f64| Critical {
+            at: Location::Round { phi, r: 0.02 },
+            position: phi,
+            value: severity,
+        };
+        let g = Governing {
+            static_point: Some((at(0.0, 0.5), Some(2.0))),
+            fatigue_point: Some((at(3.0, 0.8), Some(1.25))),
+            fatigue_note: None,
+        };
+        assert_eq!(g.decision().map(|c| c.position), Some(3.0));
+        let g = Governing {
+            static_point: Some((at(0.0, 0.9), Some(1.1))),
+            ..g
+        };
+        assert_eq!(g.decision().map(|c| c.position), Some(0.0));
+        // Unloaded in fatigue (n = ∞): the static point decides.
+        let g = Governing {
+            fatigue_point: Some((at(3.0, 0.0), None)),
+            ..g
+        };
+        assert_eq!(g.decision().map(|c| c.position), Some(0.0));
+    }
+
+    #[test]
+    fn a_shaft_in_bending_and_torsion_governs_on_its_tensile_fibre() {
+        // Ø40 mm, Mz = 1 kN·m, T = 1.5 kN·m, 4140, fatigue R = 0: equal von Mises on both
+        // fibres; the static tie and the fatigue factor both pick the tensile one.
+        let c = Choices {
+            source: Source::Section,
+            material: MaterialPick::Table(4),
+            fatigue: true,
+            ..Choices::default()
+        };
+        let mut n = demo(&c);
+        for (k, v) in [
+            (Num::N, 0.0),
+            (Num::Mz, 1000.0),
+            (Num::T, 1500.0),
+            (Num::Vy, 0.0),
+            (Num::Ratio, 0.0),
+        ] {
+            n.0.insert(k, v);
+        }
+        let (t, _) = source::evaluate(&c, &n, StressUnit::MPa, stresscase_core::AngleUnit::Degree)
+            .unwrap()
+            .unwrap();
+        let j = judge(&c, &n, &t, StressUnit::MPa).unwrap();
+        let g = governing(&c, &n, StressUnit::MPa, &j).unwrap().unwrap();
+        let tensile = |crit: &Critical| {
+            let stresscase_core::section::Location::Round { phi, .. } = crit.at else {
+                panic!()
+            };
+            // φ from +y: the +y fibre (φ = 0) is in compression under a positive Mz.
+            (phi - core::f64::consts::PI).abs() < 1e-6
+        };
+        let (s, ns) = g.static_point.clone().unwrap();
+        let (f, nf) = g.fatigue_point.clone().unwrap();
+        assert!(tensile(&s) && tensile(&f), "{s:?} {f:?}");
+        assert!(nf.unwrap() < 2.0 && ns.unwrap() > 2.0);
+        assert!(tensile(g.decision().unwrap()));
+    }
 }

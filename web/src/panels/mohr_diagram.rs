@@ -9,6 +9,7 @@
 
 use crate::case::{CaseForm, Evaluation, Mode};
 use crate::numfmt::format_sig;
+use crate::panels::stale_notice::StaleBadge;
 use crate::plot::{nice_ticks, Frame, Viewport};
 use leptos::prelude::*;
 use stresscase_core::{MohrCircle, ShearAxis};
@@ -328,7 +329,11 @@ fn kind_class(k: PointKind) -> &'static str {
 
 /// The SVG diagram, with the shear-axis convention switch above it.
 #[component]
-pub fn MohrDiagram(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
+pub fn MohrDiagram(
+    form: RwSignal<CaseForm>,
+    shown: Memo<Option<Evaluation>>,
+    stale: Memo<bool>,
+) -> impl IntoView {
     let pic = Memo::new(move |_| shown.with(|s| s.as_ref().map(picture)));
     let axis_choice = move |a: ShearAxis, id: &'static str, text: &'static str| {
         view! {
@@ -342,7 +347,7 @@ pub fn MohrDiagram(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) ->
     };
     view! {
         <section class="panel diagram" id="panel-mohr">
-            <h2>"Mohr diagram"</h2>
+            <h2>"Mohr diagram"<StaleBadge stale=stale/></h2>
             <div class="axis-switch" role="radiogroup" aria-label="Shear axis direction">
                 "Draw positive shear: "
                 {axis_choice(ShearAxis::PositiveDown, "axis-down", "downward (turn senses agree)")}

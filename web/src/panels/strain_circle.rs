@@ -4,6 +4,7 @@
 
 use crate::case::Evaluation;
 use crate::numfmt::format_sig;
+use crate::panels::stale_notice::StaleBadge;
 use crate::plot::{nice_ticks, Frame, Viewport};
 use crate::source::Outcome;
 use leptos::prelude::*;
@@ -97,7 +98,7 @@ pub fn picture(e: &Evaluation) -> Option<Picture> {
 
 /// The strain circle panel (only for a rosette).
 #[component]
-pub fn StrainCircle(shown: Memo<Option<Evaluation>>) -> impl IntoView {
+pub fn StrainCircle(shown: Memo<Option<Evaluation>>, stale: Memo<bool>) -> impl IntoView {
     let pic = Memo::new(move |_| shown.with(|e| e.as_ref().and_then(picture)));
     move || {
         pic.get().map(|p| {
@@ -115,7 +116,7 @@ pub fn StrainCircle(shown: Memo<Option<Evaluation>>) -> impl IntoView {
             }).collect_view();
             view! {
                 <figure class="panel strain-circle" id="panel-strain-circle">
-                    <h2>"Mohr's circle of strain"</h2>
+                    <h2>"Mohr's circle of strain"<StaleBadge stale=stale/></h2>
                     <svg id="strain-svg" viewBox=format!("0 0 {W} {H}") role="img" aria-label="Mohr's circle of strain"
                         data-origin-x=p.view.ox data-origin-y=p.view.oy data-px-per-unit=p.view.k>
                         <line class="axis" x1=FRAME.left x2=FRAME.left + FRAME.width y1=cy y2=cy/>

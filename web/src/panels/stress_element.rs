@@ -3,6 +3,7 @@
 
 use crate::case::{Evaluation, Mode};
 use crate::numfmt::format_sig;
+use crate::panels::stale_notice::StaleBadge;
 use leptos::prelude::*;
 
 const SIZE: f64 = 400.0;
@@ -118,10 +119,10 @@ pub fn element_picture(e: &Evaluation) -> ElementPicture {
 
 /// The SVG element view.
 #[component]
-pub fn StressElement(shown: Memo<Option<Evaluation>>) -> impl IntoView {
+pub fn StressElement(shown: Memo<Option<Evaluation>>, stale: Memo<bool>) -> impl IntoView {
     view! {
         <section class="panel element" id="panel-element">
-            <h2>"Element at θ"</h2>
+            <h2>"Element at θ"<StaleBadge stale=stale/></h2>
             {move || shown.with(|s| s.as_ref().map(|e| draw(e, &element_picture(e))))}
         </section>
     }

@@ -35,6 +35,8 @@ pub struct EnvelopeLine {
     pub points: String,
     /// Drawn heavier: the criterion in use.
     pub in_use: bool,
+    /// Drawn dashed: a criterion that does not apply to the material (a reference figure).
+    pub reference: bool,
 }
 
 /// The envelope plot as data.
@@ -63,7 +65,7 @@ pub fn picture(j: &Judgement, plane: Option<(f64, f64)>) -> Picture {
             for (a, b) in &pts {
                 extent = extent.max(a.abs()).max(b.abs());
             }
-            lines.push((v.criterion, pts));
+            lines.push((v.criterion, !v.judged && v.criterion != j.in_use, pts));
         }
     }
     let n_use = j.in_use_verdict().and_then(|v| v.factor);
@@ -81,8 +83,9 @@ pub fn picture(j: &Judgement, plane: Option<(f64, f64)>) -> Picture {
     let view = Viewport::fit(-e, e, -e, e, FRAME);
     let envelopes = lines
         .into_iter()
-        .map(|(c, pts)| EnvelopeLine {
+        .map(|(c, reference, pts)| EnvelopeLine {
             criterion: c,
+            reference,
             points: pts
                 .iter()
                 .map(|(a, b)| format!("{:.2},{:.2}", view.x(*a), view.y(*b)))
@@ -269,11 +272,11 @@ pub fn Verdict(
     };
     let plot = move || {
         data.with(|d| {
-            d.as_ref().map(|(j, u, p, _)| {
+            d.as_ref().map(|(_, u, p, _)| {
                 let u = u.symbol();
                 let (ox, oy) = (p.view.x(0.0), p.view.y(0.0));
                 let lines = p.envelopes.iter().map(|l| view! {
-                    <polyline class=format!("envelope {}", css(l.criterion)) class:in-use=l.in_use
+                    <polyline class=format!("envelope {}", css(l.criterion)) class:in-use=l.in_use class:reference=l.reference
                         data-criterion=l.criterion.key() points=l.points.clone()/>
                 }).collect_view();
                 let ticks = p.ticks.iter().map(|(_, x, y, t)| view! {
@@ -284,8 +287,8 @@ pub fn Verdict(
                 }).collect_view();
                 let load = p.load_end.map(|(x, y)| view! { <line class="load-line" id="load-line" x1=ox y1=oy x2=x y2=y/> });
                 let point = p.point.map(|(x, y)| view! { <circle class="stress-point" id="stress-point" cx=x cy=y r="5"/> });
-                let legend = j.verdicts.iter().map(|v| view! {
-                    <li class=format!("key {}", css(v.criterion))>{v.criterion.name()}</li>
+                let legend = p.envelopes.iter().map(|l| view! {
+                    <li class=format!("key {}", css(l.criterion))>{l.criterion.name()}{l.reference.then_some(" (dashed: reference only)")}</li>
                 }).collect_view();
                 let note = p.point.is_none().then_some("The state is 3D: the plot shows plane-stress envelopes only; the factors above use all three principal stresses.");
                 view! {
