@@ -536,8 +536,8 @@ mod tests {
             // φ from +y: the +y fibre (φ = 0) is in compression under a positive Mz.
             (phi - core::f64::consts::PI).abs() < 1e-6
         };
-        let (s, ns) = g.static_point.clone().unwrap();
-        let (f, nf) = g.fatigue_point.clone().unwrap();
+        let (s, ns) = g.static_point.unwrap();
+        let (f, nf) = g.fatigue_point.unwrap();
         assert!(tensile(&s) && tensile(&f), "{s:?} {f:?}");
         assert!(nf.unwrap() < 2.0 && ns.unwrap() > 2.0);
         assert!(tensile(g.decision().unwrap()));
