@@ -425,6 +425,68 @@ impl Chromium {
         .map(|_| ())
     }
 
+    /// Emulates a screen of `width` × `height` CSS pixels (a phone when `mobile`).
+    ///
+    /// # Errors
+    /// On protocol failure.
+    pub fn set_viewport(&mut self, width: u32, height: u32, mobile: bool) -> Result<()> {
+        self.call(
+            "Emulation.setDeviceMetricsOverride",
+            json!({ "width": width, "height": height, "deviceScaleFactor": 1, "mobile": mobile }),
+        )
+        .map(|_| ())
+    }
+
+    /// Lets scripts injected by the test run despite the page's Content-Security-Policy (for
+    /// accessibility rules injected into the page). Takes effect on the next navigation.
+    ///
+    /// # Errors
+    /// On protocol failure.
+    pub fn bypass_csp(&mut self) -> Result<()> {
+        self.call("Page.setBypassCSP", json!({ "enabled": true }))
+            .map(|_| ())
+    }
+
+    /// Prints the page to PDF as the browser's "Save as PDF" does, on paper of `width` ×
+    /// `height` inches, and writes it to `path`.
+    ///
+    /// # Errors
+    /// On protocol or file failure.
+    pub fn print_pdf(&mut self, path: &Path, width: f64, height: f64) -> Result<()> {
+        use base64::Engine as _;
+        let r = self.call(
+            "Page.printToPDF",
+            json!({ "paperWidth": width, "paperHeight": height, "printBackground": true,
+                    "marginTop": 0, "marginBottom": 0, "marginLeft": 0, "marginRight": 0,
+                    "preferCSSPageSize": false }),
+        )?;
+        let data = r["data"].as_str().ok_or("no PDF data")?;
+        let bytes = base64::engine::general_purpose::STANDARD
+            .decode(data)
+            .map_err(|e| e.to_string())?;
+        if let Some(dir) = path.parent() {
+            std::fs::create_dir_all(dir).map_err(|e| e.to_string())?;
+        }
+        std::fs::write(path, bytes).map_err(|e| format!("{}: {e}", path.display()))
+    }
+
+    /// A screenshot of what is on screen (the viewport only).
+    ///
+    /// # Errors
+    /// On protocol or file failure.
+    pub fn screenshot_viewport(&mut self, path: &Path) -> Result<()> {
+        use base64::Engine as _;
+        let r = self.call("Page.captureScreenshot", json!({ "format": "png" }))?;
+        let data = r["data"].as_str().ok_or("no screenshot data")?;
+        let bytes = base64::engine::general_purpose::STANDARD
+            .decode(data)
+            .map_err(|e| e.to_string())?;
+        if let Some(dir) = path.parent() {
+            std::fs::create_dir_all(dir).map_err(|e| e.to_string())?;
+        }
+        std::fs::write(path, bytes).map_err(|e| format!("{}: {e}", path.display()))
+    }
+
     /// Grants clipboard access to the page.
     ///
     /// # Errors

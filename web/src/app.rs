@@ -5,13 +5,28 @@ use crate::case::{CaseForm, Evaluation};
 use crate::history::{HistoryAction, HistoryPolicy};
 use crate::link::Case;
 use crate::panels::{
-    case_shelf::CaseShelf, caution::CautionNote, elastic_entry::ElasticEntry,
-    element_turn::ElementTurn, fatigue_check::FatigueCheck, link_notice::LinkNotice,
-    mohr_diagram::MohrDiagram, number_field::SharedResult, plane_probe::PlaneProbe,
-    results::ResultsPanel, rosette_entry::RosetteEntry, scan_plot::ScanPlot,
-    section_loads::SectionLoads, source_pick::SourcePick, stale_notice::StaleNotice,
-    strain_circle::StrainCircle, strain_entry::StrainEntry, stress_element::StressElement,
-    stress_entry::StressEntry, verdict::Verdict,
+    calc_sheet::{SheetHead, SheetTail},
+    case_shelf::CaseShelf,
+    caution::CautionNote,
+    elastic_entry::ElasticEntry,
+    element_turn::ElementTurn,
+    fatigue_check::FatigueCheck,
+    headline::Headline,
+    link_notice::LinkNotice,
+    mohr_diagram::{MohrDiagram, NarrowScreen},
+    number_field::SharedResult,
+    plane_probe::PlaneProbe,
+    results::ResultsPanel,
+    rosette_entry::RosetteEntry,
+    scan_plot::ScanPlot,
+    section_loads::SectionLoads,
+    source_pick::SourcePick,
+    stale_notice::StaleNotice,
+    strain_circle::StrainCircle,
+    strain_entry::StrainEntry,
+    stress_element::StressElement,
+    stress_entry::StressEntry,
+    verdict::Verdict,
 };
 use leptos::prelude::*;
 
@@ -105,16 +120,36 @@ pub fn App() -> impl IntoView {
         );
     let stale = Memo::new(move |_| result.with(Result::is_err));
     provide_context::<SharedResult>(result);
+    // Phones get drawings made for their width; follow the window as it turns or resizes.
+    let narrow = RwSignal::new(browser::is_narrow());
+    provide_context(NarrowScreen(narrow));
+    let _ = window_event_listener(leptos::ev::resize, move |_| {
+        let now = browser::is_narrow();
+        if narrow.get_untracked() != now {
+            narrow.set(now);
+        }
+    });
 
     view! {
         <header class="masthead">
             <h1>"Stresscase"</h1>
             <p class="tagline">"Stress state at one critical point — from loads, gauges or strains — with its principal stresses, all three Mohr's circles and the plane that matters."</p>
         </header>
+        <SheetHead form=form shown=shown/>
+        <Headline shown=shown stale=stale on_print=browser::print/>
         <CautionNote/>
         <LinkNotice problem=link_problem/>
         <StaleNotice form=form result=result shown=shown/>
+        // The answer leads: the three-circle diagram first, the case beside it.
         <main class="bench">
+            <div class="pictures" class:stale=move || stale.get()>
+                <MohrDiagram form=form shown=shown stale=stale/>
+                <ScanPlot form=form shown=shown stale=stale/>
+                <div class="picture-pair">
+                    <StressElement shown=shown stale=stale/>
+                    <StrainCircle shown=shown stale=stale/>
+                </div>
+            </div>
             <div class="inputs">
                 <SourcePick form=form shown=shown/>
                 <SectionLoads form=form shown=shown/>
@@ -125,12 +160,6 @@ pub fn App() -> impl IntoView {
                 <ElementTurn form=form shown=shown/>
                 <PlaneProbe form=form shown=shown/>
                 <CaseShelf form=form storage_problem=storage_problem/>
-            </div>
-            <div class="pictures" class:stale=move || stale.get()>
-                <MohrDiagram form=form shown=shown stale=stale/>
-                <StressElement shown=shown stale=stale/>
-                <ScanPlot form=form shown=shown stale=stale/>
-                <StrainCircle shown=shown stale=stale/>
             </div>
         </main>
         <div class="decision" class:stale=move || stale.get()>
@@ -164,5 +193,6 @@ pub fn App() -> impl IntoView {
                 <dt>"E, ν, α"</dt><dd>"Young's modulus, Poisson's ratio, coefficient of thermal expansion"</dd>
             </dl>
         </footer>
+        <SheetTail form=form shown=shown/>
     }
 }

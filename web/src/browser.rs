@@ -84,6 +84,43 @@ pub fn url_with(link: &str) -> String {
     format!("{base}#{link}")
 }
 
+/// Width in CSS pixels below which the page draws for a phone.
+pub const NARROW_WIDTH: f64 = 600.0;
+
+/// Whether the window is narrower than [`NARROW_WIDTH`] (a phone).
+#[must_use]
+pub fn is_narrow() -> bool {
+    web_sys::window()
+        .and_then(|w| w.inner_width().ok())
+        .and_then(|v| v.as_f64())
+        .is_some_and(|w| w < NARROW_WIDTH)
+}
+
+/// Opens the browser's print dialog (print or save as PDF the calc sheet).
+pub fn print() {
+    if let Some(w) = web_sys::window() {
+        let _ = w.print();
+    }
+}
+
+/// The local date and time now, as `YYYY-MM-DD HH:MM` and the UTC offset.
+#[must_use]
+pub fn now_text() -> String {
+    let d = js_sys::Date::new_0();
+    let offset = -d.get_timezone_offset();
+    format!(
+        "{:04}-{:02}-{:02} {:02}:{:02} (UTC{}{:02}:{:02})",
+        d.get_full_year(),
+        d.get_month() + 1,
+        d.get_date(),
+        d.get_hours(),
+        d.get_minutes(),
+        if offset < 0.0 { '−' } else { '+' },
+        (offset.abs() / 60.0).floor(),
+        offset.abs() % 60.0
+    )
+}
+
 /// Milliseconds since the epoch.
 #[must_use]
 pub fn now_ms() -> f64 {
@@ -103,19 +140,35 @@ pub async fn copy(text: &str) -> Result<(), String> {
         .map_err(|e| describe(&e))
 }
 
-/// Offers `text` as a file download named `name`.
+/// Offers `text` as a file download named `name`, of media type `mime`.
+///
+/// # Errors
+/// When the browser refuses to make the file.
+pub fn download_as(name: &str, text: &str, mime: &str) -> Result<(), String> {
+    let parts = js_sys::Array::of1(&JsValue::from_str(text));
+    let opts = web_sys::BlobPropertyBag::new();
+    opts.set_type(mime);
+    let blob = web_sys::Blob::new_with_str_sequence_and_options(&parts, &opts)
+        .map_err(|e| describe(&e))?;
+    download_blob(name, &blob)
+}
+
+/// Offers `text` as a JSON file download named `name`.
 ///
 /// # Errors
 /// When the browser refuses to make the file.
 pub fn download(name: &str, text: &str) -> Result<(), String> {
+    download_as(name, text, "application/json")
+}
+
+/// Offers a blob as a file download named `name`.
+///
+/// # Errors
+/// When the browser refuses to make the file.
+pub fn download_blob(name: &str, blob: &web_sys::Blob) -> Result<(), String> {
     let w = web_sys::window().ok_or("no window")?;
     let doc = w.document().ok_or("no document")?;
-    let parts = js_sys::Array::of1(&JsValue::from_str(text));
-    let opts = web_sys::BlobPropertyBag::new();
-    opts.set_type("application/json");
-    let blob = web_sys::Blob::new_with_str_sequence_and_options(&parts, &opts)
-        .map_err(|e| describe(&e))?;
-    let url = web_sys::Url::create_object_url_with_blob(&blob).map_err(|e| describe(&e))?;
+    let url = web_sys::Url::create_object_url_with_blob(blob).map_err(|e| describe(&e))?;
     let a: web_sys::HtmlAnchorElement = doc
         .create_element("a")
         .map_err(|e| describe(&e))?
@@ -123,13 +176,106 @@ pub fn download(name: &str, text: &str) -> Result<(), String> {
     a.set_href(&url);
     a.set_download(name);
     a.click();
-    // Revoking at once can cancel the download; the file is small, so free it a minute later.
+    // Revoking at once can cancel the download; free it a minute later.
     leptos::prelude::set_timeout(
         move || {
             let _ = web_sys::Url::revoke_object_url(&url);
         },
         std::time::Duration::from_secs(60),
     );
+    Ok(())
+}
+
+/// The drawing `#id` as a self-contained SVG document (the page's stylesheet embedded, its
+/// displayed size as width and height), with that size in CSS pixels.
+///
+/// # Errors
+/// When there is no such drawing.
+pub fn svg_document(id: &str, scale: f64) -> Result<(String, f64, f64), String> {
+    let doc = web_sys::window()
+        .and_then(|w| w.document())
+        .ok_or("no document")?;
+    let el = doc
+        .get_element_by_id(id)
+        .ok_or_else(|| format!("no drawing #{id} on the page"))?;
+    let rect = el.get_bounding_client_rect();
+    let (w, h) = (rect.width().round(), rect.height().round());
+    let css = doc
+        .query_selector("style")
+        .ok()
+        .flatten()
+        .and_then(|s| s.text_content())
+        .unwrap_or_default();
+    Ok((svg_file(&el.outer_html(), &css, w * scale, h * scale), w, h))
+}
+
+/// Wraps an `<svg>` element's markup as a standalone file: XML declaration, namespace, size and
+/// the stylesheet (in CDATA) as its first child.
+#[must_use]
+pub fn svg_file(markup: &str, css: &str, width: f64, height: f64) -> String {
+    let end = markup.find('>').unwrap_or(markup.len());
+    let (open, rest) = markup.split_at(end);
+    let mut head = open.to_string();
+    if !head.contains("xmlns=") {
+        head.push_str(" xmlns=\"http://www.w3.org/2000/svg\"");
+    }
+    head.push_str(&format!(" width=\"{width}\" height=\"{height}\""));
+    let css = css.replace("]]>", "]]]]><![CDATA[>");
+    format!(
+        "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n{head}><style><![CDATA[{css}]]></style>{}",
+        rest.get(1..).unwrap_or("")
+    )
+}
+
+/// Offers the drawing `#id` as a PNG at twice its displayed size, named `name`.
+///
+/// # Errors
+/// When there is no such drawing or the browser refuses to draw it.
+pub fn export_png(id: &str, name: &str) -> Result<(), String> {
+    use wasm_bindgen::closure::Closure;
+    let (svg, w, h) = svg_document(id, 2.0)?;
+    let doc = web_sys::window()
+        .and_then(|w| w.document())
+        .ok_or("no document")?;
+    let canvas: web_sys::HtmlCanvasElement = doc
+        .create_element("canvas")
+        .map_err(|e| describe(&e))?
+        .unchecked_into();
+    let (pw, ph) = (2.0 * w, 2.0 * h);
+    canvas.set_width(pw as u32);
+    canvas.set_height(ph as u32);
+    let img = web_sys::HtmlImageElement::new().map_err(|e| describe(&e))?;
+    let name = name.to_string();
+    let drawn = img.clone();
+    let onload = Closure::once(move || {
+        let Some(ctx) = canvas
+            .get_context("2d")
+            .ok()
+            .flatten()
+            .map(JsCast::unchecked_into::<web_sys::CanvasRenderingContext2d>)
+        else {
+            return;
+        };
+        ctx.set_fill_style_str("#ffffff");
+        ctx.fill_rect(0.0, 0.0, pw, ph);
+        if ctx
+            .draw_image_with_html_image_element_and_dw_and_dh(&drawn, 0.0, 0.0, pw, ph)
+            .is_err()
+        {
+            return;
+        }
+        let done = Closure::once(move |blob: JsValue| {
+            if let Ok(blob) = blob.dyn_into::<web_sys::Blob>() {
+                let _ = download_blob(&name, &blob);
+            }
+        });
+        let _ = canvas.to_blob(done.as_ref().unchecked_ref());
+        done.forget();
+    });
+    img.set_onload(Some(onload.as_ref().unchecked_ref()));
+    onload.forget();
+    let encoded: String = js_sys::encode_uri_component(&svg).into();
+    img.set_src(&format!("data:image/svg+xml;charset=utf-8,{encoded}"));
     Ok(())
 }
 

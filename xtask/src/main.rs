@@ -199,16 +199,46 @@ fn setup(browser: bool) -> Result {
         )?;
     }
 
-    if browser && !chromium().is_file() {
-        eprintln!("xtask: Chromium missing; installing Debian's chromium");
+    let missing_apt: Vec<&str> = [
+        ("chromium", chromium().is_file()),
+        ("poppler-utils", Path::new("/usr/bin/pdftotext").is_file()),
+    ]
+    .into_iter()
+    .filter(|(_, present)| browser && !present)
+    .map(|(name, _)| name)
+    .collect();
+    if !missing_apt.is_empty() {
+        eprintln!(
+            "xtask: {} missing; installing from Debian",
+            missing_apt.join(", ")
+        );
         run("apt-get", &["update"])?;
-        run_env(
-            "apt-get",
-            &["install", "-y", "chromium"],
-            &[("DEBIAN_FRONTEND", "noninteractive")],
+        let mut args = vec!["install", "-y"];
+        args.extend(&missing_apt);
+        run_env("apt-get", &args, &[("DEBIAN_FRONTEND", "noninteractive")])?;
+    }
+    if browser && !axe_script().is_file() {
+        eprintln!("xtask: axe-core missing; installing it from npm into target/npm");
+        let prefix = root().join("target/npm");
+        std::fs::create_dir_all(&prefix).map_err(|e| e.to_string())?;
+        run(
+            "npm",
+            &[
+                "install",
+                "--no-audit",
+                "--no-fund",
+                "--prefix",
+                &prefix.to_string_lossy(),
+                "axe-core@4",
+            ],
         )?;
     }
     Ok(())
+}
+
+/// The accessibility rules the browser tests inject into the page (npm's axe-core).
+fn axe_script() -> PathBuf {
+    root().join("target/npm/node_modules/axe-core/axe.min.js")
 }
 
 fn chromium() -> PathBuf {
@@ -291,6 +321,8 @@ fn test() -> Result {
             "page_decision",
             "--test",
             "page_trust",
+            "--test",
+            "page_sheet",
             "--",
             "--ignored",
             "--test-threads=2",

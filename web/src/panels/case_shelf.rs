@@ -172,7 +172,7 @@ pub fn CaseShelf(
         move |field: Field| move || form.with(|f| f.problem(field)).unwrap_or_default();
     view! {
         <fieldset class="panel" id="panel-shelf">
-            <legend>"Keep and share"</legend>
+            <legend><h2 class="panel-title">"Keep and share"</h2></legend>
             <div class="field wide" class:invalid=move || form.with(|f| f.problem(Field::Title).is_some())>
                 <label for="in-title">"Title (part and point)"</label>
                 <input type="text" id="in-title" maxlength="200" autocomplete="off"
@@ -194,8 +194,9 @@ pub fn CaseShelf(
             <div class="buttons">
                 <button type="button" id="copy-link" on:click=copy>"Copy link"</button>
             </div>
+            <label class="save-label" for="save-name">"Save under the name"</label>
             <div class="save-row">
-                <input type="text" id="save-name" placeholder="Name to save under (default: the title)" maxlength="100"
+                <input type="text" id="save-name" placeholder="default: the title" maxlength="100"
                     prop:value=move || save_name.get() on:input:target=move |ev| save_name.set(ev.target().value())/>
                 <button type="button" id="save-case" on:click=save>"Save"</button>
             </div>

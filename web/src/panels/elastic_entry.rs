@@ -60,7 +60,7 @@ pub fn ElasticEntry(
     let typed = Memo::new(move |_| form.with(|f| f.choices.elastic_typed()));
     view! {
         <fieldset class="panel" id="panel-elastic">
-            <legend>"Elastic constants (isotropic)"</legend>
+            <legend><h2 class="panel-title">"Elastic constants (isotropic)"</h2></legend>
             <div hidden=move || own.get()>
                 <ChoiceSelect form=form id="elastic-from" label="E, ν and α"
                     options=vec![("mat", "from the material chosen under “Will it hold?”"), ("typed", "typed below")]

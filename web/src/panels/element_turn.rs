@@ -31,7 +31,7 @@ pub fn ElementTurn(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) ->
     };
     view! {
         <fieldset class="panel" id="panel-turn">
-            <legend>"Turn the element"</legend>
+            <legend><h2 class="panel-title">"Turn the element"</h2></legend>
             <div class="angle-row">
                 <NumberField form=form field=Field::Angle/>
                 <label class="unit-pick">
@@ -47,7 +47,8 @@ pub fn ElementTurn(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) ->
                     </select>
                 </label>
             </div>
-            <input type="range" id="angle-slider" aria-label="θ"
+            <label class="slider-label" for="angle-slider">"Drag to turn θ"</label>
+            <input type="range" id="angle-slider"
                 prop:min=move || format!("{}", -span()) prop:max=move || format!("{}", span()) prop:step=move || step().to_string()
                 prop:value=move || form.with(|f| parse_number(&f.angle).map(|v| v.to_string()).unwrap_or_default())
                 on:input:target=move |ev| form.update(|f| f.angle = ev.target().value())/>

@@ -7,6 +7,7 @@ use crate::case::{CaseForm, Evaluation, Field};
 use crate::judge::{FatigueOutcome, Judgement};
 use crate::numfmt::{format_for_entry, format_sig, RESULT_DIGITS};
 use crate::panels::choice_select::ChoiceSelect;
+use crate::panels::export_buttons::ExportButtons;
 use crate::panels::number_field::SourceFields;
 use crate::panels::stale_notice::StaleBadge;
 use crate::plot::nice_ticks;
@@ -287,7 +288,7 @@ pub fn FatigueCheck(
                     <p class="warnings">{caution}</p>
                     <p class="hint">"The criterion in use and first-cycle yield are judged; the other criteria are reference figures. Factors use the load line through the origin. A compressive mean (σm,eq < 0) is taken as not helping: n = Se/σa,eq. Marin factors and Se′ are Shigley's correlations (ch. 6); the size factor is for rotating round sections."</p>
                 </div>
-                <figure class="fatigue-plot">{diagram}</figure>
+                <figure class="fatigue-plot">{diagram}<ExportButtons svg_id="fatigue-svg" name="fatigue"/></figure>
             </div>
         </section>
     }

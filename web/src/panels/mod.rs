@@ -1,11 +1,14 @@
 //! One file per panel the user sees, named after it.
 
+pub mod calc_sheet;
 pub mod case_shelf;
 pub mod caution;
 pub mod choice_select;
 pub mod elastic_entry;
 pub mod element_turn;
+pub mod export_buttons;
 pub mod fatigue_check;
+pub mod headline;
 pub mod link_notice;
 pub mod mohr_diagram;
 pub mod number_field;

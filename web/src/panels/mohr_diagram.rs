@@ -9,14 +9,15 @@
 
 use crate::case::{CaseForm, Evaluation, Mode};
 use crate::numfmt::format_sig;
+use crate::panels::export_buttons::ExportButtons;
 use crate::panels::stale_notice::StaleBadge;
 use crate::plot::{nice_ticks, Frame, Viewport};
 use leptos::prelude::*;
 use stresscase_core::{MohrCircle, ShearAxis};
 
-/// Drawing width in SVG pixels.
+/// Drawing width in SVG pixels (wide drawing).
 pub const WIDTH: f64 = 720.0;
-/// Drawing height in SVG pixels.
+/// Drawing height in SVG pixels (wide drawing).
 pub const HEIGHT: f64 = 440.0;
 const FRAME: Frame = Frame {
     left: 64.0,
@@ -24,6 +25,40 @@ const FRAME: Frame = Frame {
     width: 620.0,
     height: 350.0,
 };
+
+/// The drawing's size and plot frame, in SVG pixels.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Size {
+    /// viewBox width.
+    pub width: f64,
+    /// viewBox height.
+    pub height: f64,
+    /// The plot area.
+    pub frame: Frame,
+}
+
+/// From a tablet up: shown at about its own size.
+pub const WIDE: Size = Size {
+    width: WIDTH,
+    height: HEIGHT,
+    frame: FRAME,
+};
+
+/// On a phone: drawn for a narrow screen, so its labels stay at their size instead of shrinking.
+pub const NARROW: Size = Size {
+    width: 380.0,
+    height: 380.0,
+    frame: Frame {
+        left: 46.0,
+        top: 30.0,
+        width: 318.0,
+        height: 300.0,
+    },
+};
+
+/// Whether the screen is narrow (a phone), shared by the page.
+#[derive(Debug, Clone, Copy)]
+pub struct NarrowScreen(pub RwSignal<bool>);
 
 /// A circle as drawn.
 #[derive(Debug, Clone, PartialEq)]
@@ -108,15 +143,24 @@ pub struct Picture {
     pub rotation_note: &'static str,
     /// Which circle is which, in words.
     pub legend: &'static str,
+    /// The drawing's size.
+    pub size: Size,
 }
 
 fn value(v: f64, unit: &str) -> String {
     format!("{} {unit}", format_sig(v, 4))
 }
 
-/// Builds the picture for an evaluation.
+/// Builds the wide picture for an evaluation.
 #[must_use]
 pub fn picture(e: &Evaluation) -> Picture {
+    picture_sized(e, WIDE)
+}
+
+/// Builds the picture for an evaluation at `size`.
+#[must_use]
+pub fn picture_sized(e: &Evaluation, size: Size) -> Picture {
+    let frame = size.frame;
     let unit = e.unit.symbol();
     let axis: ShearAxis = e.shear_axis;
     let m = &e.mohr3d;
@@ -135,7 +179,7 @@ pub fn picture(e: &Evaluation) -> Picture {
     }
     let r = m.c13.radius.max(pm.circle.radius);
     let pad = 0.08 * (hi - lo).max(2.0 * r).max(f64::MIN_POSITIVE);
-    let view = Viewport::fit(lo - pad, hi + pad, -r - pad, r + pad, FRAME);
+    let view = Viewport::fit(lo - pad, hi + pad, -r - pad, r + pad, frame);
 
     let mark = |role: &'static str, c: &MohrCircle, dashed: bool| CircleMark {
         role,
@@ -274,9 +318,9 @@ pub fn picture(e: &Evaluation) -> Picture {
     });
 
     let sigma_ticks = nice_ticks(
-        view.sigma_at(FRAME.left),
-        view.sigma_at(FRAME.left + FRAME.width),
-        8,
+        view.sigma_at(frame.left),
+        view.sigma_at(frame.left + frame.width),
+        if size.width < WIDTH { 5 } else { 8 },
     )
     .into_iter()
     .map(|v| Tick {
@@ -285,8 +329,8 @@ pub fn picture(e: &Evaluation) -> Picture {
     })
     .collect();
     let tau_ticks = nice_ticks(
-        view.height_at(FRAME.top + FRAME.height),
-        view.height_at(FRAME.top),
+        view.height_at(frame.top + frame.height),
+        view.height_at(frame.top),
         6,
     )
     .into_iter()
@@ -295,7 +339,7 @@ pub fn picture(e: &Evaluation) -> Picture {
         text: format_sig(axis.height(h), 3),
     })
     .collect();
-    let tau_axis_x = view.x(0.0).clamp(FRAME.left, FRAME.left + FRAME.width);
+    let tau_axis_x = view.x(0.0).clamp(frame.left, frame.left + frame.width);
 
     Picture {
         view,
@@ -314,6 +358,7 @@ pub fn picture(e: &Evaluation) -> Picture {
         } else {
             "Ink: C13 through σ1 and σ3. Teal: C12. Violet: C23. Every plane's (σn, |τn|) lies inside C13 and outside the two smaller circles; X, Y, X′, Y′ and N are faces and the chosen plane."
         },
+        size,
     }
 }
 
@@ -334,7 +379,15 @@ pub fn MohrDiagram(
     shown: Memo<Option<Evaluation>>,
     stale: Memo<bool>,
 ) -> impl IntoView {
-    let pic = Memo::new(move |_| shown.with(|s| s.as_ref().map(picture)));
+    let narrow = use_context::<NarrowScreen>().map(|n| n.0);
+    let pic = Memo::new(move |_| {
+        let size = if narrow.is_some_and(|n| n.get()) {
+            NARROW
+        } else {
+            WIDE
+        };
+        shown.with(|s| s.as_ref().map(|e| picture_sized(e, size)))
+    });
     let axis_choice = move |a: ShearAxis, id: &'static str, text: &'static str| {
         view! {
             <label>
@@ -354,12 +407,27 @@ pub fn MohrDiagram(
                 {axis_choice(ShearAxis::PositiveUp, "axis-up", "upward (graph style)")}
             </div>
             {move || pic.get().map(|p| draw(&p))}
+            <ExportButtons svg_id="mohr-svg" name="mohr"/>
         </section>
     }
 }
 
+/// A point's label; one that would run past the drawing's right edge is set to its left.
+fn label(m: &PointMark, width: f64) -> impl IntoView {
+    // About 7 px a character at 12 px.
+    let long = m.x + m.offset.0 + 7.0 * m.label.chars().count() as f64 > width;
+    let (x, anchor) = if long {
+        (m.x - m.offset.0.abs(), "end")
+    } else {
+        (m.x + m.offset.0, "start")
+    };
+    view! { <text x=x y=m.y + m.offset.1 text-anchor=anchor>{m.label.clone()}</text> }
+}
+
 fn draw(p: &Picture) -> impl IntoView {
-    let f = FRAME;
+    let width = p.size.width;
+    let f = p.size.frame;
+    let narrow = p.size == NARROW;
     let axis_y = p.view.y(0.0);
     let circles = p
         .circles
@@ -381,7 +449,7 @@ fn draw(p: &Picture) -> impl IntoView {
             view! {
                 <g class=kind_class(m.kind) data-role=m.role>
                     <circle cx=m.x cy=m.y r="4.5"/>
-                    <text x=m.x + m.offset.0 y=m.y + m.offset.1>{m.label.clone()}</text>
+                    {label(m, width)}
                 </g>
             }
         })
@@ -411,7 +479,7 @@ fn draw(p: &Picture) -> impl IntoView {
         })
         .collect_view();
     view! {
-        <svg id="mohr-svg" class="mohr" viewBox=format!("0 0 {WIDTH} {HEIGHT}") role="img"
+        <svg id="mohr-svg" class="mohr" class:narrow=narrow viewBox=format!("0 0 {} {}", p.size.width, p.size.height) role="img"
             aria-label="Mohr's circles of the stress state"
             data-origin-x=p.view.ox data-origin-y=p.view.oy data-px-per-unit=p.view.k>
             <defs>

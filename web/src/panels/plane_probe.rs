@@ -18,7 +18,7 @@ pub fn PlaneProbe(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> 
     };
     view! {
         <fieldset class="panel" id="panel-probe">
-            <legend>"Plane by its normal"</legend>
+            <legend><h2 class="panel-title">"Plane by its normal"</h2></legend>
             <div class="component-grid three">
                 {Field::NORMAL.into_iter().map(|field| view! { <NumberField form=form field=field/> }).collect_view()}
             </div>

@@ -24,6 +24,8 @@ pub struct Row {
     pub text: String,
     /// The exact value as text where it is not an f64 (beyond double range, e.g. `6e450`).
     pub raw: Option<String>,
+    /// The unit of `value` ("" for a dimensionless number or a text row).
+    pub unit: String,
 }
 
 /// A titled group of rows.
@@ -47,6 +49,7 @@ fn num(key: &'static str, label: impl Into<String>, v: f64, unit: &str) -> Row {
         value: Some(v),
         text,
         raw: None,
+        unit: unit.to_string(),
     }
 }
 
@@ -68,6 +71,7 @@ fn magnitude(key: &'static str, label: &str, m: Magnitude, unit: &str) -> Row {
                 if overflow { "above" } else { "below" }
             ),
             raw: Some(format!("{mantissa}e{exponent}")),
+            unit: unit.to_string(),
         },
     }
 }
@@ -84,6 +88,10 @@ fn angle(key: &'static str, label: impl Into<String>, radians: f64, unit: AngleU
         value: Some(v),
         text,
         raw: None,
+        unit: match unit {
+            AngleUnit::Degree => "°".into(),
+            AngleUnit::Radian => "rad".into(),
+        },
     }
 }
 
@@ -94,6 +102,7 @@ fn text(key: &'static str, label: impl Into<String>, t: String) -> Row {
         value: None,
         text: t,
         raw: None,
+        unit: String::new(),
     }
 }
 
@@ -571,6 +580,33 @@ fn strain_group(e: &Evaluation) -> Group {
     }
 }
 
+/// The results as CSV: a comment line with the case link, a header, then one record per
+/// result: quantity, value (unrounded, or the text shown for a text row), unit, key.
+#[must_use]
+pub fn csv(e: &Evaluation, link: &str) -> String {
+    let mut w = csv::Writer::from_writer(Vec::new());
+    let mut record = |fields: [&str; 4]| {
+        let _ = w.write_record(fields);
+    };
+    record(["quantity", "value", "unit", "key"]);
+    for g in groups(e) {
+        for r in g.rows {
+            let label = format!("{}: {}", g.title, r.label.trim());
+            let value = r
+                .raw
+                .clone()
+                .or_else(|| r.value.map(|v| v.to_string()))
+                .unwrap_or_else(|| r.text.clone());
+            record([&label, &value, &r.unit, r.key]);
+        }
+    }
+    let body = w
+        .into_inner()
+        .map(|b| String::from_utf8_lossy(&b).into_owned())
+        .unwrap_or_default();
+    format!("# Stresscase results; case link: {link}\n{body}")
+}
+
 /// The results tables.
 #[component]
 pub fn ResultsPanel(shown: Memo<Option<Evaluation>>, stale: Memo<bool>) -> impl IntoView {
@@ -605,10 +641,29 @@ pub fn ResultsPanel(shown: Memo<Option<Evaluation>>, stale: Memo<bool>) -> impl 
         })
     };
     let mismatch = move || shown.with(|e| e.as_ref().and_then(|e| e.elastic.mismatch.clone()));
+    let status = RwSignal::new(String::new());
+    let save_csv = move |_| {
+        let text = shown.with_untracked(|e| {
+            e.as_ref()
+                .map(|e| csv(e, &crate::browser::url_with(&crate::browser::hash())))
+        });
+        if let Some(text) = text {
+            let r = crate::browser::download_as("stresscase-results.csv", &text, "text/csv");
+            status.set(
+                r.err()
+                    .map(|e| format!("Not saved: {e}."))
+                    .unwrap_or_default(),
+            );
+        }
+    };
     view! {
         <section class="panel results" id="panel-results" class:stale=move || stale.get()>
             <h2>"Results" {move || stale.get().then_some(" — stale, last valid input")}</h2>
             {move || mismatch().map(|m| view! { <p class="warnings mismatch" id="elastic-mismatch" role="note"><strong>"E and ν: "</strong>{m}</p> })}
+            <div class="buttons export-row">
+                <button type="button" id="export-csv" on:click=save_csv>"Save results as CSV"</button>
+                <span class="status" role="status">{move || status.get()}</span>
+            </div>
             <div class="result-grid">{content}</div>
         </section>
     }
@@ -634,6 +689,25 @@ mod tests {
                 }
             }
         }
+    }
+
+    #[test]
+    fn the_csv_holds_every_result_with_its_unit_and_the_link() {
+        let e = CaseForm::demo().evaluate().unwrap();
+        let text = csv(&e, "http://x.invalid/#v=1&a=b,c");
+        let mut lines = text.lines();
+        assert_eq!(
+            lines.next(),
+            Some("# Stresscase results; case link: http://x.invalid/#v=1&a=b,c")
+        );
+        let body: String = lines.collect::<Vec<_>>().join("\n");
+        let mut r = ::csv::Reader::from_reader(body.as_bytes());
+        let rows: Vec<_> = r.records().map(Result::unwrap).collect();
+        let s1 = rows.iter().find(|r| &r[3] == "sigma1").unwrap();
+        assert_eq!(s1[1].parse::<f64>().unwrap(), e.principal.sigma1());
+        assert_eq!(&s1[2], "MPa");
+        let n = groups(&e).iter().map(|g| g.rows.len()).sum::<usize>();
+        assert_eq!(rows.len(), n);
     }
 
     #[test]

@@ -82,7 +82,7 @@ pub fn RosetteEntry(
             let gauge_nums = gauge_nums.clone();
             view! {
                 <fieldset class="panel" id="panel-rosette">
-                    <legend>"Strain-gauge rosette"</legend>
+                    <legend><h2 class="panel-title">"Strain-gauge rosette"</h2></legend>
                     <ChoiceSelect form=form id="rosette-layout" label="Layout"
                         options=vec![("rect", "rectangular 0°/45°/90°"), ("delta", "delta 0°/60°/120°"), ("any", "any angles, 3 to 8 gauges")]
                         get=|f| tokens::token(&tokens::LAYOUT, f.choices.layout)

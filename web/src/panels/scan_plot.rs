@@ -8,6 +8,7 @@
 use crate::case::{CaseForm, Evaluation, Field};
 use crate::judge::Governing;
 use crate::numfmt::{format_for_entry, format_sig};
+use crate::panels::export_buttons::ExportButtons;
 use crate::panels::results::location_text;
 use crate::panels::stale_notice::StaleBadge;
 use crate::plot::nice_ticks;
@@ -427,6 +428,7 @@ pub fn ScanPlot(
                         <button type="button" id="use-max-vm" on:click=move |_| go(|s| s.max_von_mises.at)>"Move the point to the highest von Mises"</button>
                         <button type="button" id="use-max-s1" on:click=move |_| go(|s| s.max_principal.at)>"Move the point to the highest σ1"</button>
                     </div>
+                    <ExportButtons svg_id="scan-svg" name="scan"/>
                 </figure>
             }
         })

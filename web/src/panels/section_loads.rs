@@ -61,7 +61,7 @@ pub fn SectionLoads(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
             let thin = matches!(k, SectionKind::ThinCylinder | SectionKind::ThinSphere);
             view! {
                 <fieldset class="panel" id="panel-section">
-                    <legend>"Loads on a section"</legend>
+                    <legend><h2 class="panel-title">"Loads on a section"</h2></legend>
                     <ChoiceSelect form=form id="section-kind" label="Section" options=kinds.clone()
                         get=|f| tokens::token(&tokens::KIND, f.choices.kind)
                         set=|f, v| if let Some(k) = tokens::value(&tokens::KIND, v) {

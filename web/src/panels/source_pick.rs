@@ -38,7 +38,7 @@ pub fn SourcePick(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> 
     ];
     view! {
         <fieldset class="panel" id="panel-source">
-            <legend>"Where the stress comes from"</legend>
+            <legend><h2 class="panel-title">"Where the stress comes from"</h2></legend>
             <div class="mode-switch source-switch" role="radiogroup" aria-label="Where the stress comes from">
                 {options.into_iter().map(|(src, id, text)| view! {
                     <label>

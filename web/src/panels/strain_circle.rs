@@ -4,6 +4,7 @@
 
 use crate::case::Evaluation;
 use crate::numfmt::format_sig;
+use crate::panels::export_buttons::ExportButtons;
 use crate::panels::stale_notice::StaleBadge;
 use crate::plot::{nice_ticks, Frame, Viewport};
 use crate::source::Outcome;
@@ -128,6 +129,7 @@ pub fn StrainCircle(shown: Memo<Option<Evaluation>>, stale: Memo<bool>) -> impl 
                         <text class="axis-label" x=p.view.x(0.0) + 6.0 y=FRAME.top + 10.0>{p.labels.1.clone()}</text>
                     </svg>
                     <figcaption>"Filled: each gauge direction on the fitted circle. Open: the gauge's reading. A gap between them is that gauge's residual."</figcaption>
+                    <ExportButtons svg_id="strain-svg" name="strain-circle"/>
                 </figure>
             }
         })

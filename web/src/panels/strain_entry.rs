@@ -20,7 +20,7 @@ pub fn StrainEntry(
     move || {
         on.get().then(|| view! {
             <fieldset class="panel" id="panel-strain">
-                <legend>"Strains (Hooke's law)"</legend>
+                <legend><h2 class="panel-title">"Strains (Hooke's law)"</h2></legend>
                 <ChoiceSelect form=form id="strain-condition" label="Condition"
                     options=vec![("pstress", "plane stress (σz = 0; εz follows)"), ("pstrain", "plane strain (εz = 0; σz follows)"), ("3d", "full 3D (all six strains)")]
                     get=|f| tokens::token(&tokens::CONDITION, f.choices.condition)

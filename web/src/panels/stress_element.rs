@@ -3,6 +3,7 @@
 
 use crate::case::{Evaluation, Mode};
 use crate::numfmt::format_sig;
+use crate::panels::export_buttons::ExportButtons;
 use crate::panels::stale_notice::StaleBadge;
 use leptos::prelude::*;
 
@@ -124,6 +125,7 @@ pub fn StressElement(shown: Memo<Option<Evaluation>>, stale: Memo<bool>) -> impl
         <section class="panel element" id="panel-element">
             <h2>"Element at θ"<StaleBadge stale=stale/></h2>
             {move || shown.with(|s| s.as_ref().map(|e| draw(e, &element_picture(e))))}
+            <ExportButtons svg_id="element-svg" name="element"/>
         </section>
     }
 }

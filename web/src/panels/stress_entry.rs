@@ -48,7 +48,7 @@ pub fn StressEntry(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) ->
         .collect_view();
     view! {
         <fieldset class="panel" id="panel-stress">
-            <legend>"Stress at the point"</legend>
+            <legend><h2 class="panel-title">"Stress at the point"</h2></legend>
             <p class="case-title" id="case-title">{move || form.with(|f| f.title.clone())}</p>
             <div class="derived" hidden=move || typed.get()>
                 <p class="hint">{move || form.with(|f| derived_from(f.choices.source))}</p>

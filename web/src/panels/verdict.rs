@@ -9,6 +9,7 @@ use crate::case::{CaseForm, Evaluation, Field, Mode};
 use crate::judge::Judgement;
 use crate::numfmt::{format_for_entry, format_sig, RESULT_DIGITS};
 use crate::panels::choice_select::ChoiceSelect;
+use crate::panels::export_buttons::ExportButtons;
 use crate::panels::number_field::SourceFields;
 use crate::panels::stale_notice::StaleBadge;
 use crate::plot::{nice_ticks, Frame, Viewport};
@@ -338,7 +339,7 @@ pub fn Verdict(
                     </table>
                     <p class="hint">"n is the factor by which every load (so every stress) can grow before the envelope is reached. Only the criteria for the material's kind are judged (ductile: von Mises, Tresca; brittle: maximum normal, Coulomb–Mohr, modified Mohr); the others are reference figures. Ductile means elongation of 5 % or more (common practice)."</p>
                 </div>
-                <figure class="envelope-plot">{plot}</figure>
+                <figure class="envelope-plot">{plot}<ExportButtons svg_id="envelope-svg" name="envelopes"/></figure>
             </div>
             <p class="caution verdict-caution" id="verdict-caution">
                 <strong>"Not a design allowable. "</strong>

@@ -1,0 +1,372 @@
+//! The calc sheet: what the browser prints (or saves as PDF). On screen these parts are hidden;
+//! in print everything else but the headline, the Mohr diagram, the criteria and the results is
+//! hidden. [`SheetHead`] opens page 1 with the title, the part and point, the date, the note and
+//! every input with its unit; [`SheetTail`] closes the sheet with the assumptions, the sources of
+//! every check, the whole case link with its QR code, and the caution.
+//!
+//! [`inputs`], [`assumptions`] and [`qr_path`] are plain functions, tested natively.
+
+use crate::browser;
+use crate::case::{CaseForm, Evaluation, Field, Mode};
+use crate::link::Case;
+use crate::panels::elastic_entry::describe;
+use crate::source::{tokens, Cycle, Endurance, Num, Outcome, Source};
+use leptos::prelude::*;
+use qrcode::{Color, EcLevel, QrCode};
+use stresscase_core::criteria::{self, Criterion, MohrBranch};
+use stresscase_core::section::SAINT_VENANT;
+
+/// One printed input: what it is, and its value with the unit.
+pub type InputLine = (String, String);
+
+fn choice_text(f: &CaseForm) -> String {
+    let c = &f.choices;
+    match c.source {
+        Source::Typed => match f.mode {
+            Mode::Plane => "stress components, typed (plane stress)".into(),
+            Mode::Full => "stress components, typed (full 3D tensor)".into(),
+        },
+        Source::Section => format!(
+            "loads on a section: {}",
+            match tokens::token(&tokens::KIND, c.kind) {
+                "shaft" => "solid round shaft",
+                "tube" => "tube",
+                "rect" => "solid rectangle",
+                "thincyl" => "thin-walled cylinder",
+                _ => "thin-walled sphere",
+            }
+        ),
+        Source::Rosette => format!(
+            "strain-gauge rosette: {}",
+            match tokens::token(&tokens::LAYOUT, c.layout) {
+                "rect" => "rectangular 0/45/90°",
+                "delta" => "delta 0/60/120°",
+                _ => "gauges at the angles given",
+            }
+        ),
+        Source::Strain => format!(
+            "strains by Hooke's law: {}",
+            match tokens::token(&tokens::CONDITION, c.condition) {
+                "pstress" => "plane stress",
+                "pstrain" => "plane strain",
+                _ => "full 3D",
+            }
+        ),
+    }
+}
+
+/// Every input of the case as printed: its label and its value with the unit.
+#[must_use]
+pub fn inputs(f: &CaseForm, e: &Evaluation) -> Vec<InputLine> {
+    let line = |label: String, text: &str, unit: &str| {
+        let value = if unit.is_empty() {
+            text.to_string()
+        } else {
+            format!("{text} {unit}")
+        };
+        (label, value)
+    };
+    let mut v = vec![("where the stress comes from".to_string(), choice_text(f))];
+    for field in Field::STRESS {
+        if f.is_active(field) {
+            v.push(line(f.label(field), f.text(field), f.unit_of(field)));
+        }
+    }
+    let skip_elastic = [Num::E, Num::Nu, Num::Alpha];
+    for n in f.choices.active() {
+        if skip_elastic.contains(&n) {
+            continue;
+        }
+        let field = Field::Src(n);
+        let text = f.text(field);
+        if text.trim().is_empty() {
+            continue;
+        }
+        v.push(line(f.label(field), text, f.unit_of(field)));
+    }
+    v.push((
+        "elastic constants".into(),
+        describe(&e.elastic, e.choices.modulus_unit),
+    ));
+    let j = &e.judgement;
+    v.push(("material".into(), j.name.clone()));
+    v.push(("static criterion in use".into(), j.in_use.name().into()));
+    if let Some(fat) = &j.fatigue {
+        let cycle = match f.choices.cycle {
+            Cycle::Ratio => "proportional: minimum = R × the state on screen",
+            Cycle::Minimum => "the state on screen is the maximum; the minimum as given",
+            Cycle::Alternating => "the state on screen is the mean; the amplitude as given",
+        };
+        v.push(("fatigue cycle".into(), cycle.into()));
+        v.push((
+            "endurance limit".into(),
+            match f.choices.endurance {
+                Endurance::Estimate => "estimated: Se′ = 0.5·Sut with Marin factors".into(),
+                Endurance::Given => "given".into(),
+            },
+        ));
+        v.push(("fatigue criterion in use".into(), fat.in_use.name().into()));
+    }
+    v.push(line(
+        f.label(Field::Angle),
+        f.text(Field::Angle),
+        f.unit_of(Field::Angle),
+    ));
+    v.push((
+        "plane normal n (nx, ny, nz)".into(),
+        format!(
+            "({}, {}, {})",
+            f.text(Field::Nx),
+            f.text(Field::Ny),
+            f.text(Field::Nz)
+        ),
+    ));
+    v
+}
+
+/// Every assumption that changes a number of this case, in words.
+#[must_use]
+pub fn assumptions(e: &Evaluation) -> Vec<String> {
+    let mut v = Vec::new();
+    if e.mode == Mode::Plane {
+        v.push("Plane stress at the point: σz = τyz = τzx = 0.".to_string());
+    }
+    v.push(format!(
+        "Elastic constants: {}.",
+        describe(&e.elastic, e.choices.modulus_unit)
+    ));
+    if let Some(m) = &e.elastic.mismatch {
+        v.push(m.clone());
+    }
+    match &e.outcome {
+        Some(Outcome::Section(s)) => {
+            for w in &s.warnings {
+                v.push((*w).to_string());
+            }
+        }
+        Some(Outcome::Rosette(_)) => v.push(
+            "Gauge readings are taken as temperature-compensated; the stress follows from plane-stress Hooke's law."
+                .into(),
+        ),
+        Some(Outcome::Strain(_)) | None => {}
+    }
+    let j = &e.judgement;
+    v.push(format!(
+        "The material is treated as {} (elongation {} %; 5 % or more is ductile, common practice); {} is the criterion in use.",
+        if j.strengths.is_ductile() { "ductile" } else { "brittle" },
+        crate::numfmt::format_sig(j.strengths.elongation(), 3),
+        j.in_use.name()
+    ));
+    if let Some(a) = criteria::assumption(j.in_use, &j.strengths) {
+        v.push(format!("{}: {a}.", j.in_use.name()));
+    }
+    if j.in_use == Criterion::ModifiedMohr {
+        v.push(format!(
+            "Modified Mohr: {}.",
+            MohrBranch::of(e.principal.values()).describe()
+        ));
+    }
+    v.push(
+        "Factors of safety scale every load, so every stress, together (proportional loading)."
+            .into(),
+    );
+    if let Some(f) = &j.fatigue {
+        v.push("Fatigue: von Mises equivalents of the alternating and mean parts, the mean signed by I1; factors along the load line through the origin; a compressive mean is taken as not helping (n = Se/σa,eq).".into());
+        if f.estimate.is_some() {
+            v.push(
+                "Se estimated as 0.5·Sut with Shigley's Marin factors (steels, Sut ≤ 1400 MPa)."
+                    .into(),
+            );
+        }
+        if let Some(c) = f.caution {
+            v.push(c.to_string());
+        }
+    }
+    v
+}
+
+/// The published sources behind the checks on the sheet.
+pub const SOURCES: [&str; 7] = [
+    "Principal stresses, transformation, Mohr's circles, invariants: Timoshenko & Goodier, Theory of Elasticity; Gere & Goodno, Mechanics of Materials; Malvern, Introduction to the Mechanics of a Continuous Medium.",
+    "Equivalent stresses and the Lode angle: Boresi & Schmidt, Advanced Mechanics of Materials; Bai & Wierzbicki (2008).",
+    "Sections and vessels: beam theory and VQ/(It) (Gere & Goodno); Saint-Venant torsion of rectangles and Lamé's thick cylinder (Timoshenko & Goodier).",
+    "Rosettes and Hooke's law: Gere & Goodno; transverse sensitivity after the gauge makers' published correction.",
+    "Static criteria and factors of safety: Shigley's Mechanical Engineering Design, ch. 5.",
+    "Fatigue criteria, Se′ and Marin factors: Shigley's Mechanical Engineering Design, ch. 6.",
+    "Unit factors: NIST SP 811.",
+];
+
+/// Most bytes a QR code holds (version 40, level L, byte mode).
+pub const QR_CAPACITY: usize = 2953;
+
+/// The QR code of `text` as an SVG path in module units with a 4-module quiet zone, and the
+/// side in modules; `None` when the text is too long for a QR code.
+#[must_use]
+pub fn qr_path(text: &str) -> Option<(String, usize)> {
+    let code = QrCode::with_error_correction_level(text.as_bytes(), EcLevel::L).ok()?;
+    let w = code.width();
+    let mut d = String::new();
+    for (i, c) in code.to_colors().into_iter().enumerate() {
+        if c == Color::Dark {
+            d.push_str(&format!("M{} {}h1v1h-1z", i % w + 4, i / w + 4));
+        }
+    }
+    Some((d, w + 8))
+}
+
+/// Page 1's top: title, part and point, date, note, inputs.
+#[component]
+pub fn SheetHead(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
+    let rows = move || {
+        shown.with(|e| {
+            e.as_ref().map(|e| {
+                form.with(|f| inputs(f, e))
+                    .into_iter()
+                    .map(|(k, v)| view! { <tr><th scope="row">{k}</th><td>{v}</td></tr> })
+                    .collect_view()
+            })
+        })
+    };
+    let verdict = move || {
+        shown.with(|e| {
+            e.as_ref().map(|e| {
+                let j = &e.judgement;
+                let mut s = match j.in_use_verdict() {
+                    Some(v) => format!(
+                        "Static, {}: n = {} against the required {} — {}.",
+                        j.in_use.name(),
+                        v.factor
+                            .map_or_else(|| "∞".into(), |n| crate::numfmt::format_sig(n, 3)),
+                        crate::numfmt::format_sig(j.required, 3),
+                        if v.passes { "passes" } else { "does not pass" }
+                    ),
+                    None => format!("{} does not apply to {}.", j.in_use.name(), j.name),
+                };
+                if let Some(f) = &j.fatigue {
+                    let n = f.factor_in_use();
+                    s.push_str(&format!(
+                        " Fatigue, {}: n = {} — {}.",
+                        f.in_use.name(),
+                        n.map_or_else(|| "∞".into(), |n| crate::numfmt::format_sig(n, 3)),
+                        if n.is_none_or(|n| n >= j.required) {
+                            "passes"
+                        } else {
+                            "does not pass"
+                        }
+                    ));
+                }
+                s
+            })
+        })
+    };
+    view! {
+        <section class="sheet-head print-only" id="sheet-head">
+            <p class="sheet-brand">"Stresscase calc sheet"</p>
+            <h1 class="sheet-title">{move || form.with(|f| if f.title.trim().is_empty() { "Untitled case".to_string() } else { f.title.clone() })}</h1>
+            <p class="sheet-date">"Printed " {browser::now_text}</p>
+            <p class="sheet-note" hidden=move || form.with(|f| f.note.trim().is_empty())>{move || form.with(|f| f.note.clone())}</p>
+            <table class="sheet-inputs"><caption>"Inputs"</caption><tbody>{rows}</tbody></table>
+            <p class="sheet-verdict" id="sheet-verdict">{verdict}</p>
+        </section>
+    }
+}
+
+/// The sheet's end: assumptions, conventions are printed from the page, sources, link, QR, caution.
+#[component]
+pub fn SheetTail(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
+    let link = Memo::new(move |_| {
+        form.with(|f| {
+            Case::from_form(f)
+                .ok()
+                .map(|c| browser::url_with(&c.to_link()))
+        })
+    });
+    let items = move || {
+        shown.with(|e| {
+            e.as_ref().map(|e| {
+                assumptions(e)
+                    .into_iter()
+                    .map(|a| view! { <li>{a}</li> })
+                    .collect_view()
+            })
+        })
+    };
+    let qr = move || {
+        link.with(|l| {
+            l.as_ref().map(|l| match qr_path(l) {
+                Some((d, side)) => view! {
+                    <svg class="qr" id="sheet-qr" viewBox=format!("0 0 {side} {side}") role="img" aria-label="QR code of the case link" data-modules=side - 8>
+                        <rect width=side height=side fill="#fff"/>
+                        <path d=d fill="#000"/>
+                    </svg>
+                }
+                .into_any(),
+                None => view! {
+                    <p class="qr-too-long" id="sheet-qr-none">{format!(
+                        "No QR code: this link is {} bytes long, more than a QR code holds ({QR_CAPACITY}). Use the printed link.",
+                        l.len()
+                    )}</p>
+                }
+                .into_any(),
+            })
+        })
+    };
+    let sources = SOURCES
+        .iter()
+        .map(|s| view! { <li>{*s}</li> })
+        .collect_view();
+    let material_source = move || {
+        shown.with(|e| {
+            e.as_ref().map(|e| {
+                format!(
+                    "Material data: {}.",
+                    e.judgement.source.unwrap_or("entered by the user")
+                )
+            })
+        })
+    };
+    view! {
+        <section class="sheet-tail print-only" id="sheet-tail">
+            <h2>"Assumptions"</h2>
+            <ul class="sheet-assumptions">{items}</ul>
+            <h2>"Sources of the checks"</h2>
+            <ul class="sheet-sources">{sources}<li>{material_source}</li><li>{SAINT_VENANT}</li></ul>
+            <h2>"The case link"</h2>
+            <div class="sheet-link-row">
+                <p class="sheet-link" id="sheet-link">{move || link.get().unwrap_or_default()}</p>
+                {qr}
+            </div>
+            <p class="caution sheet-caution" id="sheet-caution">
+                <strong>"Engineering aid, not a design authority. "</strong>
+                "These results support, and do not replace, checks under the applicable codes and standards and review by a licensed engineer. Table values are typical or specified minimum properties recalled from handbooks, not design allowables."
+            </p>
+        </section>
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn every_input_is_printed_with_its_unit() {
+        let f = CaseForm::demo();
+        let e = f.evaluate().unwrap();
+        let lines = inputs(&f, &e);
+        let find = |k: &str| lines.iter().find(|(l, _)| l == k).map(|(_, v)| v.clone());
+        assert_eq!(find("σx").as_deref(), Some("84 MPa"));
+        assert_eq!(find("τxy").as_deref(), Some("37 MPa"));
+        assert!(find("σz").is_none(), "plane stress prints no σz input");
+        assert!(find("elastic constants").unwrap().contains("207 GPa"));
+        assert_eq!(find("θ").as_deref(), Some("30 °"));
+        assert!(assumptions(&e)[0].contains("Plane stress"));
+    }
+
+    #[test]
+    fn a_qr_code_holds_a_link_up_to_its_capacity() {
+        let (d, side) = qr_path("https://example.invalid/#v=1&mode=plane").unwrap();
+        assert!(d.starts_with('M') && side >= 21 + 8);
+        assert!(qr_path(&"a".repeat(QR_CAPACITY)).is_some());
+        assert!(qr_path(&"a".repeat(QR_CAPACITY + 1)).is_none());
+    }
+}
