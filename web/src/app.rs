@@ -142,13 +142,8 @@ pub fn App() -> impl IntoView {
         <StaleNotice form=form result=result shown=shown/>
         // The answer leads: the three-circle diagram first, the case beside it.
         <main class="bench">
-            <div class="pictures" class:stale=move || stale.get()>
+            <div class="pictures answer" class:stale=move || stale.get()>
                 <MohrDiagram form=form shown=shown stale=stale/>
-                <ScanPlot form=form shown=shown stale=stale/>
-                <div class="picture-pair">
-                    <StressElement shown=shown stale=stale/>
-                    <StrainCircle shown=shown stale=stale/>
-                </div>
             </div>
             <div class="inputs">
                 <SourcePick form=form shown=shown/>
@@ -160,6 +155,13 @@ pub fn App() -> impl IntoView {
                 <ElementTurn form=form shown=shown/>
                 <PlaneProbe form=form shown=shown/>
                 <CaseShelf form=form storage_problem=storage_problem/>
+            </div>
+            <div class="pictures more" class:stale=move || stale.get()>
+                <ScanPlot form=form shown=shown stale=stale/>
+                <div class="picture-pair">
+                    <StressElement shown=shown stale=stale/>
+                    <StrainCircle shown=shown stale=stale/>
+                </div>
             </div>
         </main>
         <div class="decision" class:stale=move || stale.get()>
