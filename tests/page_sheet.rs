@@ -299,10 +299,7 @@ fn downloaded(p: &mut Page, name: &str) -> Vec<u8> {
     loop {
         p.b.eval("0").unwrap(); // reads the events that arrived
         let begun = p.b.events_named("Page.downloadWillBegin");
-        if let Some(i) = begun
-            .iter()
-            .rposition(|e| e["suggestedFilename"] == name)
-        {
+        if let Some(i) = begun.iter().rposition(|e| e["suggestedFilename"] == name) {
             let url = begun[i]["url"].as_str().unwrap_or_default().to_string();
             let data = p.text(&format!(
                 "(async () => {{ const b = (window.__blobs || {{}})[{url:?}]; if (!b) return ''; return await new Promise(r => {{ const f = new FileReader(); f.onload = () => r(f.result); f.readAsDataURL(b); }}); }})()"

@@ -5,7 +5,6 @@
 
 use serde_json::{json, Value};
 use std::collections::VecDeque;
-use std::io;
 use std::net::TcpStream;
 use std::path::{Path, PathBuf};
 use std::process::{Child, Command, Stdio};
@@ -453,21 +452,13 @@ impl Chromium {
     /// # Errors
     /// On protocol or file failure.
     pub fn print_pdf(&mut self, path: &Path, width: f64, height: f64) -> Result<()> {
-        use base64::Engine as _;
         let r = self.call(
             "Page.printToPDF",
             json!({ "paperWidth": width, "paperHeight": height, "printBackground": true,
                     "marginTop": 0, "marginBottom": 0, "marginLeft": 0, "marginRight": 0,
                     "preferCSSPageSize": false }),
         )?;
-        let data = r["data"].as_str().ok_or("no PDF data")?;
-        let bytes = base64::engine::general_purpose::STANDARD
-            .decode(data)
-            .map_err(|e| e.to_string())?;
-        if let Some(dir) = path.parent() {
-            std::fs::create_dir_all(dir).map_err(|e| e.to_string())?;
-        }
-        std::fs::write(path, bytes).map_err(|e| format!("{}: {e}", path.display()))
+        write_base64(path, r["data"].as_str().ok_or("no PDF data")?)
     }
 
     /// A screenshot of what is on screen (the viewport only).
@@ -475,16 +466,8 @@ impl Chromium {
     /// # Errors
     /// On protocol or file failure.
     pub fn screenshot_viewport(&mut self, path: &Path) -> Result<()> {
-        use base64::Engine as _;
         let r = self.call("Page.captureScreenshot", json!({ "format": "png" }))?;
-        let data = r["data"].as_str().ok_or("no screenshot data")?;
-        let bytes = base64::engine::general_purpose::STANDARD
-            .decode(data)
-            .map_err(|e| e.to_string())?;
-        if let Some(dir) = path.parent() {
-            std::fs::create_dir_all(dir).map_err(|e| e.to_string())?;
-        }
-        std::fs::write(path, bytes).map_err(|e| format!("{}: {e}", path.display()))
+        write_base64(path, r["data"].as_str().ok_or("no screenshot data")?)
     }
 
     /// Grants clipboard access to the page.
@@ -550,20 +533,24 @@ impl Chromium {
     /// # Errors
     /// On protocol or file errors.
     pub fn screenshot(&mut self, path: &Path) -> Result<()> {
-        use base64::Engine as _;
         let r = self.call(
             "Page.captureScreenshot",
             json!({ "format": "png", "captureBeyondViewport": true }),
         )?;
-        let data = r["data"].as_str().ok_or("no screenshot data")?;
-        let bytes = base64::engine::general_purpose::STANDARD
-            .decode(data)
-            .map_err(|e| e.to_string())?;
-        if let Some(dir) = path.parent() {
-            std::fs::create_dir_all(dir).map_err(|e| e.to_string())?;
-        }
-        std::fs::write(path, bytes).map_err(|e: io::Error| e.to_string())
+        write_base64(path, r["data"].as_str().ok_or("no screenshot data")?)
     }
+}
+
+/// Writes DevTools' base64 `data` to `path`, making its folder.
+fn write_base64(path: &Path, data: &str) -> Result<()> {
+    use base64::Engine as _;
+    let bytes = base64::engine::general_purpose::STANDARD
+        .decode(data)
+        .map_err(|e| e.to_string())?;
+    if let Some(dir) = path.parent() {
+        std::fs::create_dir_all(dir).map_err(|e| e.to_string())?;
+    }
+    std::fs::write(path, bytes).map_err(|e| format!("{}: {e}", path.display()))
 }
 
 impl Drop for Chromium {
