@@ -81,7 +81,7 @@ fn the_answer_is_on_the_first_screen_at_every_width() {
         }
         // No diagram text below 11 CSS px (the drawing's scale included).
         let small = p.text(
-            "JSON.stringify(Array.from(document.querySelectorAll('svg[id] text')).filter(t => t.getClientRects().length > 0 && t.textContent.trim() !== '').map(t => [t.closest('svg').id, t.textContent, parseFloat(getComputedStyle(t).fontSize) * t.getScreenCTM().a]).filter(x => x[2] < 10.99))",
+            "JSON.stringify(Array.from(document.querySelectorAll('svg[id] text')).filter(t => t.getClientRects().length > 0 && t.textContent.trim() !== '').map(t => [t.closest('svg').id, t.textContent, parseFloat(getComputedStyle(t).fontSize) * Math.hypot(t.getScreenCTM().a, t.getScreenCTM().b)]).filter(x => x[2] < 10.99))",
         );
         if w <= 400 {
             assert_eq!(small, "[]", "{w}: diagram text below 11 px: {small}");
@@ -110,6 +110,34 @@ fn the_answer_is_on_the_first_screen_at_every_width() {
             .unwrap();
         p.b.eval("window.scrollTo(0, 0)").unwrap();
     }
+    // The other paths fit the narrow screens too, their drawings included.
+    for (w, h) in [(390, 844), (768, 1024)] {
+        p.b.set_viewport(w, h, w < 500).unwrap();
+        for (button, drawing) in [("src-section", "scan-svg"), ("src-rosette", "strain-svg")] {
+            p.b.click(button).unwrap();
+            p.wait_for_id(drawing);
+            settle(&mut p);
+            let (sw, cw) = (
+                num(&mut p, "document.documentElement.scrollWidth"),
+                num(&mut p, "document.documentElement.clientWidth"),
+            );
+            if sw > cw {
+                let wide = p.text(&format!(
+                    "JSON.stringify(Array.from(document.querySelectorAll('body *')).filter(e => e.getBoundingClientRect().right > {cw} + 0.5 && e.getClientRects().length > 0).slice(0, 12).map(e => (e.id || e.className || e.tagName) + ':' + Math.round(e.getBoundingClientRect().right)))"
+                ));
+                panic!("{w}, {button}: the page is {sw} px wide in {cw}; too wide: {wide}");
+            }
+            let small = p.text(
+                "JSON.stringify(Array.from(document.querySelectorAll('svg[id] text')).filter(t => t.getClientRects().length > 0 && t.textContent.trim() !== '').map(t => [t.closest('svg').id, t.textContent, parseFloat(getComputedStyle(t).fontSize) * Math.hypot(t.getScreenCTM().a, t.getScreenCTM().b)]).filter(x => x[2] < 10.99))",
+            );
+            if w < 500 {
+                assert_eq!(small, "[]", "{button}: diagram text below 11 px: {small}");
+            }
+            p.b.screenshot(&target_dir().join(format!("screens/{button}-{w}.png")))
+                .unwrap();
+        }
+    }
+    p.b.click("src-typed").unwrap();
     // Stale marks the headline too.
     p.b.type_into("in-sx", "x").unwrap();
     p.b.wait_for(
@@ -234,6 +262,31 @@ fn check_sheet(p: &mut Page, name: &str) -> u32 {
             );
         }
         assert!(pages <= 4, "{name} {paper}: {pages} pages");
+        // Page 1: title, date, inputs, headline results and verdict, the Mohr diagram.
+        let first = Command::new("pdftotext")
+            .args(["-f", "1", "-l", "1"])
+            .arg(&pdf)
+            .arg("-")
+            .output()
+            .expect("pdftotext");
+        let first: String = String::from_utf8_lossy(&first.stdout)
+            .chars()
+            .filter(|c| !c.is_whitespace())
+            .collect();
+        for want in [
+            title.as_str(),
+            "Printed",
+            "Inputs",
+            s1.as_str(),
+            n.as_str(),
+            "Mohrdiagram",
+        ] {
+            let want: String = want.chars().filter(|c| !c.is_whitespace()).collect();
+            assert!(
+                first.contains(&want),
+                "{name} {paper}: page 1 lacks {want:?}"
+            );
+        }
     }
     // The QR code of the link, made in the page.
     assert!(num(p, "+document.getElementById('sheet-qr').dataset.modules") >= 21.0);
