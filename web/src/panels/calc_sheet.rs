@@ -61,6 +61,8 @@ pub fn inputs(f: &CaseForm, e: &Evaluation) -> Vec<InputLine> {
     let line = |label: String, text: &str, unit: &str| {
         let value = if unit.is_empty() {
             text.to_string()
+        } else if unit == "°" {
+            format!("{text}°")
         } else {
             format!("{text} {unit}")
         };
@@ -217,6 +219,11 @@ pub fn qr_path(text: &str) -> Option<(String, usize)> {
 /// Page 1's top: title, part and point, date, note, inputs.
 #[component]
 pub fn SheetHead(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
+    // The date and time of printing, not of opening the page.
+    let printed = RwSignal::new(browser::now_text());
+    let _ = window_event_listener_untyped("beforeprint", move |_| {
+        printed.set(browser::now_text());
+    });
     let rows = move || {
         shown.with(|e| {
             e.as_ref().map(|e| {
@@ -263,7 +270,7 @@ pub fn SheetHead(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
         <section class="sheet-head print-only" id="sheet-head">
             <p class="sheet-brand">"Stresscase calc sheet"</p>
             <h1 class="sheet-title">{move || form.with(|f| if f.title.trim().is_empty() { "Untitled case".to_string() } else { f.title.clone() })}</h1>
-            <p class="sheet-date">"Printed " {browser::now_text}</p>
+            <p class="sheet-date">"Printed " {move || printed.get()}</p>
             <p class="sheet-note" hidden=move || form.with(|f| f.note.trim().is_empty())>{move || form.with(|f| f.note.clone())}</p>
             <table class="sheet-inputs"><caption>"Inputs"</caption><tbody>{rows}</tbody></table>
             <p class="sheet-verdict" id="sheet-verdict">{verdict}</p>
@@ -358,7 +365,7 @@ mod tests {
         assert_eq!(find("τxy").as_deref(), Some("37 MPa"));
         assert!(find("σz").is_none(), "plane stress prints no σz input");
         assert!(find("elastic constants").unwrap().contains("207 GPa"));
-        assert_eq!(find("θ").as_deref(), Some("30 °"));
+        assert_eq!(find("θ").as_deref(), Some("30°"));
         assert!(assumptions(&e)[0].contains("Plane stress"));
     }
 
