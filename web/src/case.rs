@@ -2,10 +2,10 @@
 //! evaluation that core returns for it. No browser types here, so all of it is tested natively.
 
 use crate::entry::parse_number;
-use crate::link::{check_text, Case, MAX_NOTE, MAX_TITLE};
-use crate::numfmt::format_for_entry;
+use crate::numfmt::{format_for_entry, write_number};
 use crate::source::{
-    self, Choices, Cycle, ElasticFrom, ElasticUsed, Num, Numbers, Outcome, Quantity, Source,
+    self, Choices, Cycle, ElasticFrom, ElasticUsed, MaterialPick, Num, Numbers, Outcome, Quantity,
+    Source,
 };
 use nalgebra::Vector3;
 use std::collections::BTreeMap;
@@ -17,6 +17,164 @@ use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
 use stresscase_core::{
     AngleUnit, Mohr3d, PlaneMohr, Principal, ShearAxis, StressTensor, StressUnit,
 };
+
+/// Longest title, in characters.
+pub const MAX_TITLE: usize = 200;
+/// Longest note, in characters.
+pub const MAX_NOTE: usize = 2000;
+
+/// Why a plane normal is refused, as the page and the link reader say it.
+pub const ZERO_NORMAL: &str = "n: the plane normal has zero length";
+
+/// Checks a title or note: length, no control characters, no script-like content.
+///
+/// # Errors
+/// The reason, naming nothing (the caller names the field).
+pub fn check_text(text: &str, max: usize) -> Result<(), &'static str> {
+    if text.chars().count() > max {
+        return Err(if max == MAX_TITLE {
+            "longer than 200 characters"
+        } else {
+            "longer than 2000 characters"
+        });
+    }
+    if text
+        .chars()
+        .any(|c| c.is_control() && c != '\n' && c != '\t')
+    {
+        return Err("contains control characters");
+    }
+    let lower = text.to_lowercase();
+    if lower.contains("<script") || lower.contains("javascript:") {
+        return Err("contains <script or javascript:, which a case never needs");
+    }
+    Ok(())
+}
+
+/// A case as values: what a link or a saved case holds.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Case {
+    /// Short description of the part and point.
+    pub title: String,
+    /// Longer free text.
+    pub note: String,
+    /// Plane or 3D.
+    pub mode: Mode,
+    /// Stress unit.
+    pub unit: StressUnit,
+    /// σx, σy, σz, τxy, τyz, τzx in `unit` (out-of-plane ones zero in plane mode).
+    pub stress: [f64; 6],
+    /// Element turn in `angle_unit`.
+    pub angle: f64,
+    /// Angle unit.
+    pub angle_unit: AngleUnit,
+    /// Plane normal (any non-zero length).
+    pub normal: [f64; 3],
+    /// Shear plotting convention.
+    pub shear_axis: ShearAxis,
+    /// Where the stress comes from, and that path's choices.
+    pub choices: Choices,
+    /// The numbers the path uses (exactly [`Choices::active`]), in their entry units.
+    pub numbers: BTreeMap<Num, f64>,
+}
+
+impl Case {
+    /// The built-in demo case.
+    #[must_use]
+    pub fn demo() -> Self {
+        Self::from_form(&CaseForm::demo())
+            .unwrap_or_else(|_| unreachable!("the demo form is valid"))
+    }
+
+    /// Reads a form; every active field must be valid.
+    ///
+    /// # Errors
+    /// Each invalid field with its reason.
+    pub fn from_form(form: &CaseForm) -> Result<Self, Vec<FieldProblem>> {
+        let mut problems = Vec::new();
+        let mut read = |field: Field| -> f64 {
+            if !form.is_active(field) {
+                return 0.0;
+            }
+            crate::case::read_field(field, form.text(field)).unwrap_or_else(|message| {
+                problems.push(FieldProblem { field, message });
+                0.0
+            })
+        };
+        let stress = Field::STRESS.map(&mut read);
+        let angle = read(Field::Angle);
+        let normal = Field::NORMAL.map(&mut read);
+        let numbers: BTreeMap<Num, f64> = form
+            .choices
+            .active()
+            .into_iter()
+            .filter(|&n| !(n.is_optional() && form.text(Field::Src(n)).trim().is_empty()))
+            .map(|n| (n, read(Field::Src(n))))
+            .collect();
+        if normal == [0.0; 3] && !problems.iter().any(|p| Field::NORMAL.contains(&p.field)) {
+            problems.push(FieldProblem {
+                field: Field::Nx,
+                message: ZERO_NORMAL.into(),
+            });
+        }
+        for (field, text, max) in [
+            (Field::Title, &form.title, MAX_TITLE),
+            (Field::Note, &form.note, MAX_NOTE),
+        ] {
+            if let Err(why) = check_text(text, max) {
+                problems.push(FieldProblem {
+                    field,
+                    message: why.into(),
+                });
+            }
+        }
+        if !problems.is_empty() {
+            return Err(problems);
+        }
+        // A derived tensor has no typed mode or components of its own.
+        let typed = form.choices.source == Source::Typed;
+        // The user's own material has no elastic constants: they are typed.
+        let mut choices = form.choices;
+        if choices.material == MaterialPick::Own {
+            choices.elastic = crate::source::ElasticFrom::Typed;
+        }
+        Ok(Self {
+            title: form.title.clone(),
+            note: form.note.clone(),
+            mode: if typed { form.mode } else { Mode::Plane },
+            unit: form.unit,
+            stress,
+            angle,
+            angle_unit: form.angle_unit,
+            normal,
+            shear_axis: form.shear_axis,
+            choices,
+            numbers,
+        })
+    }
+
+    /// The form showing this case (numbers written in their shortest exact form).
+    #[must_use]
+    pub fn to_form(&self) -> CaseForm {
+        let mut f = CaseForm::demo();
+        f.title.clone_from(&self.title);
+        f.note.clone_from(&self.note);
+        f.mode = self.mode;
+        f.unit = self.unit;
+        for (field, v) in Field::STRESS.into_iter().zip(self.stress) {
+            f.set_text(field, write_number(v));
+        }
+        f.angle = write_number(self.angle);
+        f.angle_unit = self.angle_unit;
+        f.normal = self.normal.map(write_number);
+        f.shear_axis = self.shear_axis;
+        f.choices = self.choices;
+        for (&n, &v) in &self.numbers {
+            f.nums.insert(n, write_number(v));
+        }
+        f
+    }
+}
 
 /// Plane stress (σz = τyz = τzx = 0) or the full 3D tensor.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]

@@ -32,7 +32,9 @@
 //! number, a text with `<script` or `javascript:`, or a link over 32 KiB is refused with
 //! a [`LinkError`] naming the problem. Nothing in a link is ever run or inserted as markup.
 
-use crate::case::{CaseForm, Field, FieldProblem, Mode};
+pub use crate::case::Case;
+use crate::case::{check_text, Mode, MAX_NOTE, MAX_TITLE, ZERO_NORMAL};
+use crate::numfmt::write_number;
 use crate::source::{
     tokens, Choices, Endurance, Layout, MaterialPick, Num, Source, ELASTIC, MAX_GAUGES,
 };
@@ -50,10 +52,6 @@ pub const LINK_VERSION: &str = "1";
 /// note at their limits in 4-byte characters percent-encode to 12 bytes each, plus the numbers.
 pub const MAX_LINK_LEN: usize = 32 * 1024;
 const _: () = assert!((MAX_TITLE + MAX_NOTE) * 12 + 4096 <= MAX_LINK_LEN);
-/// Longest title, in characters.
-pub const MAX_TITLE: usize = 200;
-/// Longest note, in characters.
-pub const MAX_NOTE: usize = 2000;
 
 /// Characters left as they are in values: letters, digits and `-._~,` (so numbers and lists
 /// stay readable).
@@ -63,33 +61,6 @@ const VALUE: &AsciiSet = &NON_ALPHANUMERIC
     .remove(b'_')
     .remove(b'~')
     .remove(b',');
-
-/// A case as values: what a link or a saved case holds.
-#[derive(Debug, Clone, PartialEq)]
-pub struct Case {
-    /// Short description of the part and point.
-    pub title: String,
-    /// Longer free text.
-    pub note: String,
-    /// Plane or 3D.
-    pub mode: Mode,
-    /// Stress unit.
-    pub unit: StressUnit,
-    /// σx, σy, σz, τxy, τyz, τzx in `unit` (out-of-plane ones zero in plane mode).
-    pub stress: [f64; 6],
-    /// Element turn in `angle_unit`.
-    pub angle: f64,
-    /// Angle unit.
-    pub angle_unit: AngleUnit,
-    /// Plane normal (any non-zero length).
-    pub normal: [f64; 3],
-    /// Shear plotting convention.
-    pub shear_axis: ShearAxis,
-    /// Where the stress comes from, and that path's choices.
-    pub choices: Choices,
-    /// The numbers the path uses (exactly [`Choices::active`]), in their entry units.
-    pub numbers: BTreeMap<Num, f64>,
-}
 
 /// Why a link was refused.
 #[derive(Debug, Clone, PartialEq, Eq)]
@@ -169,53 +140,13 @@ impl fmt::Display for LinkError {
                 f,
                 "{k}: needs {want} numbers separated by commas, found {got}"
             ),
-            Self::ZeroNormal => write!(f, "n: the plane normal has zero length"),
+            Self::ZeroNormal => write!(f, "{ZERO_NORMAL}"),
             Self::BadText(k, why) => write!(f, "{k}: {why}"),
             Self::NotUsed(k, src) => write!(
                 f,
                 "key '{k}' is not used by this case (src={src} and the choices made)"
             ),
         }
-    }
-}
-
-/// Checks a title or note: length, no control characters, no script-like content.
-///
-/// # Errors
-/// The reason, naming nothing (the caller names the field).
-pub fn check_text(text: &str, max: usize) -> Result<(), &'static str> {
-    if text.chars().count() > max {
-        return Err(if max == MAX_TITLE {
-            "longer than 200 characters"
-        } else {
-            "longer than 2000 characters"
-        });
-    }
-    if text
-        .chars()
-        .any(|c| c.is_control() && c != '\n' && c != '\t')
-    {
-        return Err("contains control characters");
-    }
-    let lower = text.to_lowercase();
-    if lower.contains("<script") || lower.contains("javascript:") {
-        return Err("contains <script or javascript:, which a case never needs");
-    }
-    Ok(())
-}
-
-/// Writes a number in its shortest form that reads back to the same f64.
-#[must_use]
-pub fn write_number(v: f64) -> String {
-    if v == 0.0 {
-        return "0".into();
-    }
-    let plain = format!("{v}");
-    let sci = format!("{v:e}");
-    if sci.len() < plain.len() {
-        sci
-    } else {
-        plain
     }
 }
 
@@ -240,102 +171,6 @@ const KEYS: [&str; 15] = [
 ];
 
 impl Case {
-    /// The built-in demo case.
-    #[must_use]
-    pub fn demo() -> Self {
-        Self::from_form(&CaseForm::demo())
-            .unwrap_or_else(|_| unreachable!("the demo form is valid"))
-    }
-
-    /// Reads a form; every active field must be valid.
-    ///
-    /// # Errors
-    /// Each invalid field with its reason.
-    pub fn from_form(form: &CaseForm) -> Result<Self, Vec<FieldProblem>> {
-        let mut problems = Vec::new();
-        let mut read = |field: Field| -> f64 {
-            if !form.is_active(field) {
-                return 0.0;
-            }
-            crate::case::read_field(field, form.text(field)).unwrap_or_else(|message| {
-                problems.push(FieldProblem { field, message });
-                0.0
-            })
-        };
-        let stress = Field::STRESS.map(&mut read);
-        let angle = read(Field::Angle);
-        let normal = Field::NORMAL.map(&mut read);
-        let numbers: BTreeMap<Num, f64> = form
-            .choices
-            .active()
-            .into_iter()
-            .filter(|&n| !(n.is_optional() && form.text(Field::Src(n)).trim().is_empty()))
-            .map(|n| (n, read(Field::Src(n))))
-            .collect();
-        if normal == [0.0; 3] && !problems.iter().any(|p| Field::NORMAL.contains(&p.field)) {
-            problems.push(FieldProblem {
-                field: Field::Nx,
-                message: LinkError::ZeroNormal.to_string(),
-            });
-        }
-        for (field, text, max) in [
-            (Field::Title, &form.title, MAX_TITLE),
-            (Field::Note, &form.note, MAX_NOTE),
-        ] {
-            if let Err(why) = check_text(text, max) {
-                problems.push(FieldProblem {
-                    field,
-                    message: why.into(),
-                });
-            }
-        }
-        if !problems.is_empty() {
-            return Err(problems);
-        }
-        // A derived tensor has no typed mode or components of its own.
-        let typed = form.choices.source == Source::Typed;
-        // The user's own material has no elastic constants: they are typed.
-        let mut choices = form.choices;
-        if choices.material == MaterialPick::Own {
-            choices.elastic = crate::source::ElasticFrom::Typed;
-        }
-        Ok(Self {
-            title: form.title.clone(),
-            note: form.note.clone(),
-            mode: if typed { form.mode } else { Mode::Plane },
-            unit: form.unit,
-            stress,
-            angle,
-            angle_unit: form.angle_unit,
-            normal,
-            shear_axis: form.shear_axis,
-            choices,
-            numbers,
-        })
-    }
-
-    /// The form showing this case (numbers written in their shortest exact form).
-    #[must_use]
-    pub fn to_form(&self) -> CaseForm {
-        let mut f = CaseForm::demo();
-        f.title.clone_from(&self.title);
-        f.note.clone_from(&self.note);
-        f.mode = self.mode;
-        f.unit = self.unit;
-        for (field, v) in Field::STRESS.into_iter().zip(self.stress) {
-            f.set_text(field, write_number(v));
-        }
-        f.angle = write_number(self.angle);
-        f.angle_unit = self.angle_unit;
-        f.normal = self.normal.map(write_number);
-        f.shear_axis = self.shear_axis;
-        f.choices = self.choices;
-        for (&n, &v) in &self.numbers {
-            f.nums.insert(n, write_number(v));
-        }
-        f
-    }
-
     /// The link text (without `#`).
     #[must_use]
     pub fn to_link(&self) -> String {

@@ -34,6 +34,21 @@ pub fn format_sig(v: f64, sig: usize) -> String {
     out.replace('-', "−")
 }
 
+/// Writes a number in its shortest form that reads back to the same f64.
+#[must_use]
+pub fn write_number(v: f64) -> String {
+    if v == 0.0 {
+        return "0".into();
+    }
+    let plain = format!("{v}");
+    let sci = format!("{v:e}");
+    if sci.len() < plain.len() {
+        sci
+    } else {
+        plain
+    }
+}
+
 /// A number beyond double range given as `mantissa`·10^`exponent`, in the same notation.
 #[must_use]
 pub fn format_decimal_power(mantissa: f64, exponent: i32, sig: usize) -> String {
