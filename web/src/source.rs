@@ -339,267 +339,177 @@ pub enum Quantity {
     Celsius,
 }
 
-const GAUGE_KEYS_A: [&str; 8] = ["a1", "a2", "a3", "a4", "a5", "a6", "a7", "a8"];
-const GAUGE_KEYS_E: [&str; 8] = ["e1", "e2", "e3", "e4", "e5", "e6", "e7", "e8"];
-const GAUGE_IDS_A: [&str; 8] = [
-    "in-ga1", "in-ga2", "in-ga3", "in-ga4", "in-ga5", "in-ga6", "in-ga7", "in-ga8",
-];
-const SECOND_KEYS: [&str; 6] = ["s2x", "s2y", "s2z", "s2xy", "s2yz", "s2zx"];
-const SECOND_IDS: [&str; 6] = [
-    "in-s2x", "in-s2y", "in-s2z", "in-s2xy", "in-s2yz", "in-s2zx",
-];
-const GAUGE_IDS_E: [&str; 8] = [
-    "in-ge1", "in-ge2", "in-ge3", "in-ge4", "in-ge5", "in-ge6", "in-ge7", "in-ge8",
+/// How a number is labelled on the page.
+#[derive(Debug, Clone, Copy)]
+pub enum Label {
+    /// Always the same words.
+    Fixed(&'static str),
+    /// Words that depend on the choices (e.g. "outer diameter D" for a tube).
+    Choice(fn(&Choices) -> String),
+    /// A component of the fatigue cycle's second state: "σx at the minimum" or "σx alternating".
+    SecondState(&'static str),
+}
+
+/// One typed number of the case, declared once: its link key, element id, label, what it
+/// measures (so its unit), its demo value and whether it may be left empty. The form, the link,
+/// the page and the tests all read this table; a path uses a number by listing it in
+/// [`Choices::active`] and reading it in its `evaluate`.
+#[derive(Debug, Clone, Copy)]
+pub struct Input {
+    /// The number.
+    pub num: Num,
+    /// Key in a case link.
+    pub key: &'static str,
+    /// Element id on the page.
+    pub id: &'static str,
+    /// Label beside the field.
+    pub label: Label,
+    /// What it measures.
+    pub quantity: Quantity,
+    /// Demo value (an invented scenario: a 40 mm shaft of a conveyor drive, a hydraulic tube, a
+    /// rosette on a press frame), in the default units; empty where nothing is invented.
+    pub demo: &'static str,
+    /// May be left empty (then absent from the case and its link).
+    pub optional: bool,
+}
+
+fn diameter_label(c: &Choices) -> String {
+    match c.kind {
+        SectionKind::ThinCylinder | SectionKind::ThinSphere => "mean diameter Dm".into(),
+        SectionKind::Tube => "outer diameter D".into(),
+        _ => "diameter d".into(),
+    }
+}
+
+fn pressure_label(c: &Choices) -> String {
+    match c.kind {
+        SectionKind::ThinCylinder | SectionKind::ThinSphere => "internal pressure p".into(),
+        _ => "internal pressure pi".into(),
+    }
+}
+
+fn along_label(c: &Choices) -> String {
+    match c.face {
+        Face::PosY | Face::NegY => "point z on the face".into(),
+        Face::PosZ | Face::NegZ => "point y on the face".into(),
+    }
+}
+
+/// Every number of the case, in link order.
+#[rustfmt::skip]
+pub static INPUTS: [Input; 62] = [
+    Input { num: Num::D, key: "d", id: "in-d", label: Label::Choice(diameter_label), quantity: Quantity::Length, demo: "40", optional: false },
+    Input { num: Num::Di, key: "di", id: "in-di", label: Label::Fixed("inner diameter Di"), quantity: Quantity::Length, demo: "28", optional: false },
+    Input { num: Num::H, key: "h", id: "in-h", label: Label::Fixed("depth h (along y)"), quantity: Quantity::Length, demo: "60", optional: false },
+    Input { num: Num::B, key: "b", id: "in-b", label: Label::Fixed("width b (along z)"), quantity: Quantity::Length, demo: "25", optional: false },
+    Input { num: Num::Wall, key: "wall", id: "in-wall", label: Label::Fixed("wall thickness t"), quantity: Quantity::Length, demo: "4", optional: false },
+    Input { num: Num::N, key: "N", id: "in-load-n", label: Label::Fixed("axial force N"), quantity: Quantity::Force, demo: "12", optional: false },
+    Input { num: Num::My, key: "My", id: "in-load-my", label: Label::Fixed("bending moment My"), quantity: Quantity::Moment, demo: "0", optional: false },
+    Input { num: Num::Mz, key: "Mz", id: "in-load-mz", label: Label::Fixed("bending moment Mz"), quantity: Quantity::Moment, demo: "380", optional: false },
+    Input { num: Num::T, key: "T", id: "in-load-t", label: Label::Fixed("torque T"), quantity: Quantity::Moment, demo: "520", optional: false },
+    Input { num: Num::Vy, key: "Vy", id: "in-load-vy", label: Label::Fixed("shear force Vy"), quantity: Quantity::Force, demo: "4.5", optional: false },
+    Input { num: Num::Vz, key: "Vz", id: "in-load-vz", label: Label::Fixed("shear force Vz"), quantity: Quantity::Force, demo: "0", optional: false },
+    Input { num: Num::Pin, key: "pin", id: "in-pin", label: Label::Choice(pressure_label), quantity: Quantity::Pressure, demo: "18", optional: false },
+    Input { num: Num::Pout, key: "pout", id: "in-pout", label: Label::Fixed("external pressure po"), quantity: Quantity::Pressure, demo: "0", optional: false },
+    Input { num: Num::Kt, key: "kt", id: "in-kt", label: Label::Fixed("Kt (normal)"), quantity: Quantity::Ratio, demo: "1", optional: false },
+    Input { num: Num::Kts, key: "kts", id: "in-kts", label: Label::Fixed("Kts (shear)"), quantity: Quantity::Ratio, demo: "1", optional: false },
+    Input { num: Num::Phi, key: "phi", id: "in-phi", label: Label::Fixed("point angle φ"), quantity: Quantity::Angle, demo: "180", optional: false },
+    Input { num: Num::R, key: "r", id: "in-r", label: Label::Fixed("point radius r"), quantity: Quantity::Length, demo: "20", optional: false },
+    Input { num: Num::Along, key: "at", id: "in-along", label: Label::Choice(along_label), quantity: Quantity::Length, demo: "0", optional: false },
+    Input { num: Num::GaugeAngle(0), key: "a1", id: "in-ga1", label: Label::Fixed("gauge 1 angle"), quantity: Quantity::Angle, demo: "0", optional: false },
+    Input { num: Num::GaugeReading(0), key: "e1", id: "in-ge1", label: Label::Fixed("gauge 1 reading"), quantity: Quantity::Strain, demo: "640", optional: false },
+    Input { num: Num::GaugeAngle(1), key: "a2", id: "in-ga2", label: Label::Fixed("gauge 2 angle"), quantity: Quantity::Angle, demo: "45", optional: false },
+    Input { num: Num::GaugeReading(1), key: "e2", id: "in-ge2", label: Label::Fixed("gauge 2 reading"), quantity: Quantity::Strain, demo: "215", optional: false },
+    Input { num: Num::GaugeAngle(2), key: "a3", id: "in-ga3", label: Label::Fixed("gauge 3 angle"), quantity: Quantity::Angle, demo: "90", optional: false },
+    Input { num: Num::GaugeReading(2), key: "e3", id: "in-ge3", label: Label::Fixed("gauge 3 reading"), quantity: Quantity::Strain, demo: "-180", optional: false },
+    Input { num: Num::GaugeAngle(3), key: "a4", id: "in-ga4", label: Label::Fixed("gauge 4 angle"), quantity: Quantity::Angle, demo: "135", optional: false },
+    Input { num: Num::GaugeReading(3), key: "e4", id: "in-ge4", label: Label::Fixed("gauge 4 reading"), quantity: Quantity::Strain, demo: "250", optional: false },
+    Input { num: Num::GaugeAngle(4), key: "a5", id: "in-ga5", label: Label::Fixed("gauge 5 angle"), quantity: Quantity::Angle, demo: "30", optional: false },
+    Input { num: Num::GaugeReading(4), key: "e5", id: "in-ge5", label: Label::Fixed("gauge 5 reading"), quantity: Quantity::Strain, demo: "420", optional: false },
+    Input { num: Num::GaugeAngle(5), key: "a6", id: "in-ga6", label: Label::Fixed("gauge 6 angle"), quantity: Quantity::Angle, demo: "60", optional: false },
+    Input { num: Num::GaugeReading(5), key: "e6", id: "in-ge6", label: Label::Fixed("gauge 6 reading"), quantity: Quantity::Strain, demo: "310", optional: false },
+    Input { num: Num::GaugeAngle(6), key: "a7", id: "in-ga7", label: Label::Fixed("gauge 7 angle"), quantity: Quantity::Angle, demo: "120", optional: false },
+    Input { num: Num::GaugeReading(6), key: "e7", id: "in-ge7", label: Label::Fixed("gauge 7 reading"), quantity: Quantity::Strain, demo: "-90", optional: false },
+    Input { num: Num::GaugeAngle(7), key: "a8", id: "in-ga8", label: Label::Fixed("gauge 8 angle"), quantity: Quantity::Angle, demo: "150", optional: false },
+    Input { num: Num::GaugeReading(7), key: "e8", id: "in-ge8", label: Label::Fixed("gauge 8 reading"), quantity: Quantity::Strain, demo: "120", optional: false },
+    Input { num: Num::GaugeKt, key: "gkt", id: "in-gkt", label: Label::Fixed("transverse sensitivity Kt"), quantity: Quantity::Percent, demo: "1.2", optional: false },
+    Input { num: Num::GaugeNu0, key: "gnu0", id: "in-gnu0", label: Label::Fixed("ν0 of the calibration beam"), quantity: Quantity::Ratio, demo: "0.285", optional: false },
+    Input { num: Num::Ex, key: "ex", id: "in-ex", label: Label::Fixed("εx"), quantity: Quantity::Strain, demo: "520", optional: false },
+    Input { num: Num::Ey, key: "ey", id: "in-ey", label: Label::Fixed("εy"), quantity: Quantity::Strain, demo: "-160", optional: false },
+    Input { num: Num::Ez, key: "ez", id: "in-ez", label: Label::Fixed("εz"), quantity: Quantity::Strain, demo: "0", optional: false },
+    Input { num: Num::Gxy, key: "gxy", id: "in-gxy", label: Label::Fixed("γxy"), quantity: Quantity::Strain, demo: "300", optional: false },
+    Input { num: Num::Gyz, key: "gyz", id: "in-gyz", label: Label::Fixed("γyz"), quantity: Quantity::Strain, demo: "0", optional: false },
+    Input { num: Num::Gzx, key: "gzx", id: "in-gzx", label: Label::Fixed("γzx"), quantity: Quantity::Strain, demo: "0", optional: false },
+    Input { num: Num::E, key: "E", id: "in-e", label: Label::Fixed("Young's modulus E"), quantity: Quantity::Modulus, demo: "200", optional: false },
+    Input { num: Num::Nu, key: "nu", id: "in-nu", label: Label::Fixed("Poisson's ratio ν"), quantity: Quantity::Ratio, demo: "0.3", optional: false },
+    Input { num: Num::Alpha, key: "alpha", id: "in-alpha", label: Label::Fixed("expansion coefficient α"), quantity: Quantity::Expansion, demo: "12", optional: false },
+    Input { num: Num::DeltaT, key: "dT", id: "in-dt", label: Label::Fixed("temperature change ΔT"), quantity: Quantity::Temperature, demo: "0", optional: false },
+    Input { num: Num::MatSy, key: "msy", id: "in-msy", label: Label::Fixed("yield strength Sy (empty if none)"), quantity: Quantity::Strength, demo: "250", optional: true },
+    Input { num: Num::MatSut, key: "msut", id: "in-msut", label: Label::Fixed("ultimate tensile Sut"), quantity: Quantity::Strength, demo: "420", optional: false },
+    Input { num: Num::MatSuc, key: "msuc", id: "in-msuc", label: Label::Fixed("ultimate compressive Suc (optional)"), quantity: Quantity::Strength, demo: "", optional: true },
+    Input { num: Num::MatElong, key: "melong", id: "in-melong", label: Label::Fixed("elongation at fracture"), quantity: Quantity::Percent, demo: "22", optional: false },
+    Input { num: Num::Required, key: "nreq", id: "in-nreq", label: Label::Fixed("required factor of safety"), quantity: Quantity::Ratio, demo: "2", optional: false },
+    Input { num: Num::Ratio, key: "R", id: "in-ratio", label: Label::Fixed("stress ratio R = σmin/σmax"), quantity: Quantity::Ratio, demo: "-1", optional: false },
+    Input { num: Num::Second(0), key: "s2x", id: "in-s2x", label: Label::SecondState("σx"), quantity: Quantity::CaseStress, demo: "", optional: false },
+    Input { num: Num::Second(1), key: "s2y", id: "in-s2y", label: Label::SecondState("σy"), quantity: Quantity::CaseStress, demo: "", optional: false },
+    Input { num: Num::Second(2), key: "s2z", id: "in-s2z", label: Label::SecondState("σz"), quantity: Quantity::CaseStress, demo: "", optional: false },
+    Input { num: Num::Second(3), key: "s2xy", id: "in-s2xy", label: Label::SecondState("τxy"), quantity: Quantity::CaseStress, demo: "", optional: false },
+    Input { num: Num::Second(4), key: "s2yz", id: "in-s2yz", label: Label::SecondState("τyz"), quantity: Quantity::CaseStress, demo: "", optional: false },
+    Input { num: Num::Second(5), key: "s2zx", id: "in-s2zx", label: Label::SecondState("τzx"), quantity: Quantity::CaseStress, demo: "", optional: false },
+    Input { num: Num::Se, key: "se", id: "in-se", label: Label::Fixed("endurance limit Se (corrected)"), quantity: Quantity::Strength, demo: "160", optional: false },
+    Input { num: Num::FatD, key: "fd", id: "in-fd", label: Label::Fixed("diameter for the size factor"), quantity: Quantity::Millimetre, demo: "40", optional: false },
+    Input { num: Num::FatTemp, key: "ftemp", id: "in-ftemp", label: Label::Fixed("operating temperature"), quantity: Quantity::Celsius, demo: "20", optional: false },
+    Input { num: Num::FatRel, key: "frel", id: "in-frel", label: Label::Fixed("reliability"), quantity: Quantity::Percent, demo: "90", optional: false },
 ];
 
 impl Num {
+    /// Its declaration in [`INPUTS`].
+    #[must_use]
+    pub fn input(self) -> &'static Input {
+        INPUTS.iter().find(|i| i.num == self).unwrap_or(&INPUTS[0])
+    }
+
     /// Every number, in link order.
     #[must_use]
     pub fn all() -> Vec<Num> {
-        let mut v = vec![
-            Num::D,
-            Num::Di,
-            Num::H,
-            Num::B,
-            Num::Wall,
-            Num::N,
-            Num::My,
-            Num::Mz,
-            Num::T,
-            Num::Vy,
-            Num::Vz,
-            Num::Pin,
-            Num::Pout,
-            Num::Kt,
-            Num::Kts,
-            Num::Phi,
-            Num::R,
-            Num::Along,
-        ];
-        for i in 0..MAX_GAUGES {
-            v.push(Num::GaugeAngle(i));
-            v.push(Num::GaugeReading(i));
-        }
-        v.extend([
-            Num::GaugeKt,
-            Num::GaugeNu0,
-            Num::Ex,
-            Num::Ey,
-            Num::Ez,
-            Num::Gxy,
-            Num::Gyz,
-            Num::Gzx,
-            Num::E,
-            Num::Nu,
-            Num::Alpha,
-            Num::DeltaT,
-            Num::MatSy,
-            Num::MatSut,
-            Num::MatSuc,
-            Num::MatElong,
-            Num::Required,
-            Num::Ratio,
-        ]);
-        v.extend((0..6).map(Num::Second));
-        v.extend([Num::Se, Num::FatD, Num::FatTemp, Num::FatRel]);
-        v
+        INPUTS.iter().map(|i| i.num).collect()
     }
 
     /// Numbers that may be left empty (then absent from the case and its link).
     #[must_use]
     pub fn is_optional(self) -> bool {
-        matches!(self, Num::MatSy | Num::MatSuc)
+        self.input().optional
     }
 
     /// The key in a case link.
     #[must_use]
     pub fn key(self) -> &'static str {
-        match self {
-            Num::D => "d",
-            Num::Di => "di",
-            Num::H => "h",
-            Num::B => "b",
-            Num::Wall => "wall",
-            Num::N => "N",
-            Num::My => "My",
-            Num::Mz => "Mz",
-            Num::T => "T",
-            Num::Vy => "Vy",
-            Num::Vz => "Vz",
-            Num::Pin => "pin",
-            Num::Pout => "pout",
-            Num::Kt => "kt",
-            Num::Kts => "kts",
-            Num::Phi => "phi",
-            Num::R => "r",
-            Num::Along => "at",
-            Num::GaugeAngle(i) => GAUGE_KEYS_A[usize::from(i.min(7))],
-            Num::GaugeReading(i) => GAUGE_KEYS_E[usize::from(i.min(7))],
-            Num::GaugeKt => "gkt",
-            Num::GaugeNu0 => "gnu0",
-            Num::Ex => "ex",
-            Num::Ey => "ey",
-            Num::Ez => "ez",
-            Num::Gxy => "gxy",
-            Num::Gyz => "gyz",
-            Num::Gzx => "gzx",
-            Num::E => "E",
-            Num::Nu => "nu",
-            Num::Alpha => "alpha",
-            Num::DeltaT => "dT",
-            Num::MatSy => "msy",
-            Num::MatSut => "msut",
-            Num::MatSuc => "msuc",
-            Num::MatElong => "melong",
-            Num::Required => "nreq",
-            Num::Ratio => "R",
-            Num::Second(i) => SECOND_KEYS[usize::from(i.min(5))],
-            Num::Se => "se",
-            Num::FatD => "fd",
-            Num::FatTemp => "ftemp",
-            Num::FatRel => "frel",
-        }
+        self.input().key
     }
 
     /// A stable element id for the page and its tests.
     #[must_use]
     pub fn id(self) -> &'static str {
-        match self {
-            Num::GaugeAngle(i) => GAUGE_IDS_A[usize::from(i.min(7))],
-            Num::GaugeReading(i) => GAUGE_IDS_E[usize::from(i.min(7))],
-            Num::D => "in-d",
-            Num::Di => "in-di",
-            Num::H => "in-h",
-            Num::B => "in-b",
-            Num::Wall => "in-wall",
-            Num::N => "in-load-n",
-            Num::My => "in-load-my",
-            Num::Mz => "in-load-mz",
-            Num::T => "in-load-t",
-            Num::Vy => "in-load-vy",
-            Num::Vz => "in-load-vz",
-            Num::Pin => "in-pin",
-            Num::Pout => "in-pout",
-            Num::Kt => "in-kt",
-            Num::Kts => "in-kts",
-            Num::Phi => "in-phi",
-            Num::R => "in-r",
-            Num::Along => "in-along",
-            Num::GaugeKt => "in-gkt",
-            Num::GaugeNu0 => "in-gnu0",
-            Num::Ex => "in-ex",
-            Num::Ey => "in-ey",
-            Num::Ez => "in-ez",
-            Num::Gxy => "in-gxy",
-            Num::Gyz => "in-gyz",
-            Num::Gzx => "in-gzx",
-            Num::E => "in-e",
-            Num::Nu => "in-nu",
-            Num::Alpha => "in-alpha",
-            Num::DeltaT => "in-dt",
-            Num::MatSy => "in-msy",
-            Num::MatSut => "in-msut",
-            Num::MatSuc => "in-msuc",
-            Num::MatElong => "in-melong",
-            Num::Required => "in-nreq",
-            Num::Ratio => "in-ratio",
-            Num::Second(i) => SECOND_IDS[usize::from(i.min(5))],
-            Num::Se => "in-se",
-            Num::FatD => "in-fd",
-            Num::FatTemp => "in-ftemp",
-            Num::FatRel => "in-frel",
-        }
+        self.input().id
     }
 
     /// The label beside the field, for the given choices.
     #[must_use]
     pub fn label(self, c: &Choices) -> String {
-        let thin = matches!(c.kind, SectionKind::ThinCylinder | SectionKind::ThinSphere);
-        match self {
-            Num::D if thin => "mean diameter Dm".into(),
-            Num::D if c.kind == SectionKind::Tube => "outer diameter D".into(),
-            Num::D => "diameter d".into(),
-            Num::Di => "inner diameter Di".into(),
-            Num::H => "depth h (along y)".into(),
-            Num::B => "width b (along z)".into(),
-            Num::Wall => "wall thickness t".into(),
-            Num::N => "axial force N".into(),
-            Num::My => "bending moment My".into(),
-            Num::Mz => "bending moment Mz".into(),
-            Num::T => "torque T".into(),
-            Num::Vy => "shear force Vy".into(),
-            Num::Vz => "shear force Vz".into(),
-            Num::Pin if thin => "internal pressure p".into(),
-            Num::Pin => "internal pressure pi".into(),
-            Num::Pout => "external pressure po".into(),
-            Num::Kt => "Kt (normal)".into(),
-            Num::Kts => "Kts (shear)".into(),
-            Num::Phi => "point angle φ".into(),
-            Num::R => "point radius r".into(),
-            Num::Along => match c.face {
-                Face::PosY | Face::NegY => "point z on the face".into(),
-                Face::PosZ | Face::NegZ => "point y on the face".into(),
+        match self.input().label {
+            Label::Fixed(s) => s.into(),
+            Label::Choice(f) => f(c),
+            Label::SecondState(name) => match c.cycle {
+                Cycle::Alternating => format!("{name} alternating"),
+                _ => format!("{name} at the minimum"),
             },
-            Num::GaugeAngle(i) => format!("gauge {} angle", i + 1),
-            Num::GaugeReading(i) => format!("gauge {} reading", i + 1),
-            Num::GaugeKt => "transverse sensitivity Kt".into(),
-            Num::GaugeNu0 => "ν0 of the calibration beam".into(),
-            Num::Ex => "εx".into(),
-            Num::Ey => "εy".into(),
-            Num::Ez => "εz".into(),
-            Num::Gxy => "γxy".into(),
-            Num::Gyz => "γyz".into(),
-            Num::Gzx => "γzx".into(),
-            Num::E => "Young's modulus E".into(),
-            Num::Nu => "Poisson's ratio ν".into(),
-            Num::Alpha => "expansion coefficient α".into(),
-            Num::DeltaT => "temperature change ΔT".into(),
-            Num::MatSy => "yield strength Sy (empty if none)".into(),
-            Num::MatSut => "ultimate tensile Sut".into(),
-            Num::MatSuc => "ultimate compressive Suc (optional)".into(),
-            Num::MatElong => "elongation at fracture".into(),
-            Num::Required => "required factor of safety".into(),
-            Num::Ratio => "stress ratio R = σmin/σmax".into(),
-            Num::Second(i) => {
-                let name = ["σx", "σy", "σz", "τxy", "τyz", "τzx"][usize::from(i.min(5))];
-                match c.cycle {
-                    Cycle::Alternating => format!("{name} alternating"),
-                    _ => format!("{name} at the minimum"),
-                }
-            }
-            Num::Se => "endurance limit Se (corrected)".into(),
-            Num::FatD => "diameter for the size factor".into(),
-            Num::FatTemp => "operating temperature".into(),
-            Num::FatRel => "reliability".into(),
         }
     }
 
     /// What the number measures.
     #[must_use]
     pub fn quantity(self) -> Quantity {
-        match self {
-            Num::D | Num::Di | Num::H | Num::B | Num::Wall | Num::R | Num::Along => {
-                Quantity::Length
-            }
-            Num::N | Num::Vy | Num::Vz => Quantity::Force,
-            Num::My | Num::Mz | Num::T => Quantity::Moment,
-            Num::Pin | Num::Pout => Quantity::Pressure,
-            Num::Kt | Num::Kts | Num::Nu | Num::GaugeNu0 => Quantity::Ratio,
-            Num::GaugeKt => Quantity::Percent,
-            Num::Phi | Num::GaugeAngle(_) => Quantity::Angle,
-            Num::GaugeReading(_) | Num::Ex | Num::Ey | Num::Ez | Num::Gxy | Num::Gyz | Num::Gzx => {
-                Quantity::Strain
-            }
-            Num::E => Quantity::Modulus,
-            Num::Alpha => Quantity::Expansion,
-            Num::DeltaT => Quantity::Temperature,
-            Num::MatSy | Num::MatSut | Num::MatSuc | Num::Se => Quantity::Strength,
-            Num::MatElong | Num::FatRel => Quantity::Percent,
-            Num::Required | Num::Ratio => Quantity::Ratio,
-            Num::Second(_) => Quantity::CaseStress,
-            Num::FatD => Quantity::Millimetre,
-            Num::FatTemp => Quantity::Celsius,
-        }
+        self.input().quantity
     }
 
     /// The unit text beside the field.
@@ -624,59 +534,10 @@ impl Num {
         }
     }
 
-    /// The demo value (an invented scenario: a 40 mm shaft of a conveyor drive, a hydraulic
-    /// tube, a rosette on a press frame), in the default units.
+    /// The demo value, in the default units.
     #[must_use]
     pub fn demo_text(self) -> &'static str {
-        match self {
-            Num::D => "40",
-            Num::Di => "28",
-            Num::H => "60",
-            Num::B => "25",
-            Num::Wall => "4",
-            Num::N => "12",
-            Num::My => "0",
-            Num::Mz => "380",
-            Num::T => "520",
-            Num::Vy => "4.5",
-            Num::Vz => "0",
-            Num::Pin => "18",
-            Num::Pout => "0",
-            Num::Kt | Num::Kts => "1",
-            Num::Phi => "180",
-            Num::R => "20",
-            Num::Along => "0",
-            Num::GaugeAngle(i) => {
-                ["0", "45", "90", "135", "30", "60", "120", "150"][usize::from(i.min(7))]
-            }
-            Num::GaugeReading(i) => {
-                ["640", "215", "-180", "250", "420", "310", "-90", "120"][usize::from(i.min(7))]
-            }
-            Num::GaugeKt => "1.2",
-            Num::GaugeNu0 => "0.285",
-            Num::Ex => "520",
-            Num::Ey => "-160",
-            Num::Ez => "0",
-            Num::Gxy => "300",
-            Num::Gyz => "0",
-            Num::Gzx => "0",
-            Num::E => "200",
-            Num::Nu => "0.3",
-            Num::Alpha => "12",
-            Num::DeltaT => "0",
-            Num::MatSy => "250",
-            Num::MatSut => "420",
-            Num::MatSuc => "",
-            Num::MatElong => "22",
-            Num::Required => "2",
-            Num::Ratio => "-1",
-            // Never invented: the second state is typed or taken from the screen.
-            Num::Second(_) => "",
-            Num::Se => "160",
-            Num::FatD => "40",
-            Num::FatTemp => "20",
-            Num::FatRel => "90",
-        }
+        self.input().demo
     }
 }
 
@@ -1488,6 +1349,65 @@ mod tests {
                 }
             }
         }
+    }
+
+    #[test]
+    fn every_number_is_declared_once() {
+        // Each row's number finds its own row, and every variant has one: the exhaustive match
+        // stops the build when a variant is added until it is considered here.
+        for (i, row) in INPUTS.iter().enumerate() {
+            assert!(core::ptr::eq(row.num.input(), &INPUTS[i]), "{:?}", row.num);
+        }
+        let declared = |n: Num| INPUTS.iter().any(|i| i.num == n);
+        let check = |n: Num| match n {
+            Num::GaugeAngle(_) | Num::GaugeReading(_) => (0..MAX_GAUGES)
+                .all(|i| declared(Num::GaugeAngle(i)) && declared(Num::GaugeReading(i))),
+            Num::Second(_) => (0..6).all(|i| declared(Num::Second(i))),
+            Num::D
+            | Num::Di
+            | Num::H
+            | Num::B
+            | Num::Wall
+            | Num::N
+            | Num::My
+            | Num::Mz
+            | Num::T
+            | Num::Vy
+            | Num::Vz
+            | Num::Pin
+            | Num::Pout
+            | Num::Kt
+            | Num::Kts
+            | Num::Phi
+            | Num::R
+            | Num::Along
+            | Num::GaugeKt
+            | Num::GaugeNu0
+            | Num::Ex
+            | Num::Ey
+            | Num::Ez
+            | Num::Gxy
+            | Num::Gyz
+            | Num::Gzx
+            | Num::E
+            | Num::Nu
+            | Num::Alpha
+            | Num::DeltaT
+            | Num::MatSy
+            | Num::MatSut
+            | Num::MatSuc
+            | Num::MatElong
+            | Num::Required
+            | Num::Ratio
+            | Num::Se
+            | Num::FatD
+            | Num::FatTemp
+            | Num::FatRel => declared(n),
+        };
+        for n in Num::all() {
+            assert!(check(n), "{n:?}");
+        }
+        assert_eq!(INPUTS.len(), 18 + 2 * usize::from(MAX_GAUGES) + 18 + 6 + 4);
     }
 
     #[test]
