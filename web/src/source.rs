@@ -1,20 +1,27 @@
 //! Where the stress comes from: typed components, loads on a section, a strain-gauge rosette, or
-//! strains through Hooke's law. The choices and number fields of each path, their defaults (an
-//! invented demo scenario), and the call into core that turns them into a stress tensor.
-//! No formula here: every number comes from `stresscase-core`.
+//! strains through Hooke's law. This module holds what the paths share — the choices, the one
+//! table of typed numbers ([`INPUTS`]), the elastic constants in use, and the dispatch to each
+//! path's `evaluate` in its own module (`section`, `rosette`, `strain`). No formula here: every
+//! number comes from `stresscase-core`.
 
 use stresscase_core::criteria::Criterion;
 use stresscase_core::fatigue::{FatigueCriterion, Loading, Surface as FatSurface};
-use stresscase_core::hooke::{Elastic, ElasticError, Strain};
+use stresscase_core::hooke::{Elastic, ElasticError};
 use stresscase_core::material;
-use stresscase_core::rosette::{self, Gauge, RosetteError, RosetteStrain, Transverse};
-use stresscase_core::section::{
-    Concentration, Critical, Face, Loads, Location, Path, Pressure, Properties, Rank, Rectangle,
-    Round, Scan, Section, SectionError, SAINT_VENANT,
-};
+use stresscase_core::section::Face;
 use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
-use stresscase_core::vessel::{self, Ends, VesselError};
+use stresscase_core::vessel::Ends;
 use stresscase_core::{AngleUnit, StressTensor, StressUnit};
+
+mod rosette;
+mod section;
+mod strain;
+
+pub use rosette::RosetteOutcome;
+pub use section::{
+    governing, location_in, section, SectionOutcome, PLANE_STRAIN_ENDS, SCAN_SAMPLES,
+};
+pub use strain::StrainOutcome;
 
 /// Where the stress tensor comes from.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
@@ -787,36 +794,6 @@ fn problem(num: Num, message: impl Into<String>) -> SourceProblem {
     }
 }
 
-/// What a section path computed besides the tensor.
-#[derive(Debug, Clone, PartialEq)]
-pub struct SectionOutcome {
-    /// Section properties in SI (m², m⁴); None for thin vessels.
-    pub properties: Option<Properties>,
-    /// The scan with stresses in the case's unit and positions in radians (round) or the length
-    /// unit (rectangle); None for thin vessels.
-    pub scan: Option<Scan>,
-    /// von Mises at the outer and inner surface of a thin vessel, case unit.
-    pub vessel_surfaces: Option<[f64; 2]>,
-    /// Warnings to show (each says whether it is common practice).
-    pub warnings: Vec<&'static str>,
-}
-
-/// What a rosette path computed besides the tensor.
-#[derive(Debug, Clone, PartialEq)]
-pub struct RosetteOutcome {
-    /// The gauges as used (angles in radians, readings as strain).
-    pub gauges: Vec<Gauge>,
-    /// The reduced strain state (dimensionless).
-    pub strain: RosetteStrain,
-}
-
-/// What a strain path computed besides the tensor.
-#[derive(Debug, Clone, PartialEq)]
-pub struct StrainOutcome {
-    /// The full strain state used (εz from plane stress included), dimensionless.
-    pub strain: Strain,
-}
-
 /// The extra results of a source path.
 #[derive(Debug, Clone, PartialEq)]
 pub enum Outcome {
@@ -905,170 +882,6 @@ pub fn elastic(c: &Choices, n: &impl Numbers) -> Result<ElasticUsed, SourceProbl
     })
 }
 
-fn section_problem(e: SectionError, c: &Choices) -> SourceProblem {
-    let num = match e {
-        SectionError::Dimension("outer diameter" | "diameter") => Num::D,
-        SectionError::Dimension("inner diameter") | SectionError::InnerNotSmaller => Num::Di,
-        SectionError::Dimension("depth h") => Num::H,
-        SectionError::Dimension(_) => Num::B,
-        SectionError::Load("Kt") => Num::Kt,
-        SectionError::Load("Kts") => Num::Kts,
-        SectionError::Load("internal pressure") | SectionError::NoBore => Num::Pin,
-        SectionError::Load("external pressure") | SectionError::PressureNotAllowed => Num::Pout,
-        SectionError::Load("φ") => Num::Phi,
-        SectionError::Load(_) => Num::N,
-        SectionError::OffSection("r") if c.kind == SectionKind::Tube => Num::R,
-        SectionError::OffSection(_) if c.kind == SectionKind::Rectangle => Num::Along,
-        SectionError::OffSection(_) => Num::Phi,
-    };
-    problem(num, e.to_string())
-}
-
-fn vessel_problem(e: VesselError) -> SourceProblem {
-    let num = match e {
-        VesselError::Dimension("radius") => Num::D,
-        VesselError::Pressure(_) => Num::Pin,
-        _ => Num::Wall,
-    };
-    let message = match e {
-        VesselError::Dimension("radius") => "the mean diameter must be a positive number".into(),
-        other => other.to_string(),
-    };
-    problem(num, message)
-}
-
-/// Printed with plane-strain ends: the assumption and where its ν comes from.
-pub const PLANE_STRAIN_ENDS: &str = "Plane-strain ends: the member is taken as axially restrained (εz = 0), so the pressure adds σz = ν(σr + σθ), with ν from the elastic constants shown.";
-
-/// Points sampled on each scan path.
-pub const SCAN_SAMPLES: usize = 72;
-
-/// Converts every stress of a scan from pascals to `unit` and rectangle positions from metres to
-/// the length unit (round positions stay in radians).
-fn scan_in_units(mut scan: Scan, unit: StressUnit, length: LengthUnit) -> Scan {
-    let k = 1.0 / unit.pascals();
-    let l = 1.0 / length.metres();
-    for curve in &mut scan.curves {
-        let pos = if curve.path == Path::Perimeter {
-            l
-        } else {
-            1.0
-        };
-        for s in &mut curve.samples {
-            s.von_mises *= k;
-            s.sigma1 *= k;
-            s.position *= pos;
-        }
-    }
-    // Positions found by the search carry noise of about 1e-12 of the section's size: a point
-    // at the middle of a face should read 0, not 1e-14.
-    let size = scan
-        .curves
-        .iter()
-        .flat_map(|c| c.samples.iter().map(|s| s.position.abs()))
-        .fold(0.0_f64, f64::max);
-    let snap = |v: f64, scale: f64| if v.abs() < 1e-9 * scale { 0.0 } else { v };
-    for c in [&mut scan.max_von_mises, &mut scan.max_principal] {
-        c.value *= k;
-        c.at = match location_in(c.at, l) {
-            Location::Rectangle { face, along } => Location::Rectangle {
-                face,
-                along: snap(along, size),
-            },
-            round => round,
-        };
-        if matches!(c.at, Location::Rectangle { .. }) {
-            c.position *= l;
-        }
-    }
-    scan
-}
-
-/// A location with its lengths multiplied by `l`.
-#[must_use]
-pub fn location_in(at: Location, l: f64) -> Location {
-    match at {
-        Location::Round { phi, r } => Location::Round { phi, r: r * l },
-        Location::Rectangle { face, along } => Location::Rectangle {
-            face,
-            along: along * l,
-        },
-    }
-}
-
-/// The section the choices and numbers describe, in metres.
-///
-/// # Errors
-/// The refused dimension.
-pub fn section(c: &Choices, n: &impl Numbers) -> Result<Section, SourceProblem> {
-    let m = c.length.metres();
-    let s = match c.kind {
-        SectionKind::SolidRound => Round::solid(n.get(Num::D) * m).map(Section::Round),
-        SectionKind::Tube => Round::tube(n.get(Num::D) * m, n.get(Num::Di) * m).map(Section::Round),
-        SectionKind::Rectangle => {
-            Rectangle::new(n.get(Num::H) * m, n.get(Num::B) * m).map(Section::Rectangle)
-        }
-        SectionKind::ThinCylinder | SectionKind::ThinSphere => {
-            return Err(problem(Num::D, "thin vessels have no section"))
-        }
-    };
-    s.map_err(|e| section_problem(e, c))
-}
-
-/// Loads, pressure and factors in SI.
-fn section_loads(c: &Choices, n: &impl Numbers, nu: f64) -> (Loads, Pressure, Concentration) {
-    let f = c.force.newtons();
-    let mm = c.moment.newton_metres();
-    let p = c.pressure.pascals();
-    let loads = Loads {
-        n: n.get(Num::N) * f,
-        my: n.get(Num::My) * mm,
-        mz: n.get(Num::Mz) * mm,
-        t: n.get(Num::T) * mm,
-        vy: n.get(Num::Vy) * f,
-        vz: n.get(Num::Vz) * f,
-    };
-    let pressure = match c.kind {
-        SectionKind::SolidRound => Pressure {
-            inner: 0.0,
-            outer: n.get(Num::Pout) * p,
-            ends: c.ends,
-            nu,
-        },
-        SectionKind::Tube => Pressure {
-            inner: n.get(Num::Pin) * p,
-            outer: n.get(Num::Pout) * p,
-            ends: c.ends,
-            nu,
-        },
-        _ => Pressure::NONE,
-    };
-    let k = Concentration {
-        normal: n.get(Num::Kt),
-        shear: n.get(Num::Kts),
-    };
-    (loads, pressure, k)
-}
-
-/// The location of the chosen point, in metres and radians.
-fn point(c: &Choices, n: &impl Numbers, angle: AngleUnit) -> Location {
-    let m = c.length.metres();
-    match c.kind {
-        SectionKind::Rectangle => Location::Rectangle {
-            face: c.face,
-            along: n.get(Num::Along) * m,
-        },
-        SectionKind::Tube => Location::Round {
-            phi: angle.to_radians(n.get(Num::Phi)),
-            r: n.get(Num::R) * m,
-        },
-        _ => Location::Round {
-            phi: angle.to_radians(n.get(Num::Phi)),
-            r: 0.5 * n.get(Num::D) * m,
-        },
-    }
-}
-
 /// Runs the chosen path through core: the stress tensor in `unit`, and what else it found.
 /// For [`Source::Typed`] this returns `Ok(None)`.
 ///
@@ -1080,217 +893,12 @@ pub fn evaluate(
     unit: StressUnit,
     angle: AngleUnit,
 ) -> Result<Option<(StressTensor, Outcome)>, SourceProblem> {
-    let to_unit = 1.0 / unit.pascals();
-    let overflow = |num: Num| problem(num, "the result overflows; check the magnitudes");
     match c.source {
         Source::Typed => Ok(None),
-        Source::Section => {
-            if matches!(c.kind, SectionKind::ThinCylinder | SectionKind::ThinSphere) {
-                return thin_vessel(c, n, unit).map(Some);
-            }
-            let s = section(c, n)?;
-            let (loads, pressure, k) = section_loads(c, n, elastic(c, n)?.nu);
-            let at = point(c, n, angle);
-            let tensor = s
-                .stress_at(&loads, &pressure, k, at)
-                .map_err(|e| section_problem(e, c))?
-                .scaled(to_unit)
-                .map_err(|_| overflow(Num::N))?;
-            let scan = s
-                .scan(&loads, &pressure, k, SCAN_SAMPLES)
-                .map_err(|e| section_problem(e, c))?;
-            let mut warnings = vec![SAINT_VENANT];
-            if c.ends == Ends::PlaneStrain && (pressure.inner != 0.0 || pressure.outer != 0.0) {
-                warnings.push(PLANE_STRAIN_ENDS);
-            }
-            Ok(Some((
-                tensor,
-                Outcome::Section(SectionOutcome {
-                    properties: Some(s.properties()),
-                    scan: Some(scan_in_units(scan, unit, c.length)),
-                    vessel_surfaces: None,
-                    warnings,
-                }),
-            )))
-        }
-        Source::Rosette => {
-            let material = elastic(c, n)?.material;
-            let s = c.strain_unit.factor();
-            let gauges: Vec<Gauge> = (0..c.gauge_count())
-                .map(|i| Gauge {
-                    angle: match c.layout {
-                        Layout::Rectangular => rosette::RECTANGULAR[usize::from(i)],
-                        Layout::Delta => rosette::DELTA[usize::from(i)],
-                        Layout::Custom => angle.to_radians(n.get(Num::GaugeAngle(i))),
-                    },
-                    strain: n.get(Num::GaugeReading(i)) * s,
-                })
-                .collect();
-            let transverse = c.correct.then(|| Transverse {
-                kt: n.get(Num::GaugeKt) / 100.0,
-                nu0: n.get(Num::GaugeNu0),
-            });
-            let strain = rosette::reduce(&gauges, transverse).map_err(|e| {
-                let num = match e {
-                    RosetteError::NonFinite(i) => Num::GaugeReading(u8::try_from(i).unwrap_or(0)),
-                    RosetteError::BadTransverse => Num::GaugeKt,
-                    _ if c.layout == Layout::Custom => Num::GaugeAngle(0),
-                    _ => Num::GaugeReading(0),
-                };
-                problem(num, e.to_string())
-            })?;
-            let tensor = strain
-                .stress(&material)
-                .and_then(|t| t.scaled(to_unit))
-                .map_err(|_| overflow(Num::GaugeReading(0)))?;
-            Ok(Some((
-                tensor,
-                Outcome::Rosette(RosetteOutcome { gauges, strain }),
-            )))
-        }
-        Source::Strain => {
-            let ElasticUsed {
-                material, thermal, ..
-            } = elastic(c, n)?;
-            let s = c.strain_unit.factor();
-            let (ex, ey, gxy) = (n.get(Num::Ex) * s, n.get(Num::Ey) * s, n.get(Num::Gxy) * s);
-            let (tensor, strain) = match c.condition {
-                Condition::PlaneStress => {
-                    let (t, ez) = material
-                        .plane_stress(ex, ey, gxy, thermal)
-                        .map_err(|_| overflow(Num::Ex))?;
-                    (
-                        t,
-                        Strain {
-                            ex,
-                            ey,
-                            ez,
-                            gxy,
-                            ..Strain::default()
-                        },
-                    )
-                }
-                Condition::PlaneStrain => (
-                    material
-                        .plane_strain(ex, ey, gxy, thermal)
-                        .map_err(|_| overflow(Num::Ex))?,
-                    Strain {
-                        ex,
-                        ey,
-                        gxy,
-                        ..Strain::default()
-                    },
-                ),
-                Condition::Full => {
-                    let st = Strain {
-                        ex,
-                        ey,
-                        ez: n.get(Num::Ez) * s,
-                        gxy,
-                        gyz: n.get(Num::Gyz) * s,
-                        gzx: n.get(Num::Gzx) * s,
-                    };
-                    (
-                        material
-                            .stress(&st, thermal)
-                            .map_err(|_| overflow(Num::Ex))?,
-                        st,
-                    )
-                }
-            };
-            let tensor = tensor.scaled(to_unit).map_err(|_| overflow(Num::Ex))?;
-            Ok(Some((tensor, Outcome::Strain(StrainOutcome { strain }))))
-        }
+        Source::Section => section::evaluate(c, n, unit, angle).map(Some),
+        Source::Rosette => rosette::evaluate(c, n, unit, angle).map(Some),
+        Source::Strain => strain::evaluate(c, n, unit).map(Some),
     }
-}
-
-/// The point of the section where `rank` (given the tensor in `unit`) is most severe, found by
-/// core's search over the same samples as the scan; positions as in the scan (radians, or the
-/// length unit). `Ok(None)` for paths without a section.
-///
-/// # Errors
-/// A refused input, attached to its number.
-pub fn governing(
-    c: &Choices,
-    n: &impl Numbers,
-    unit: StressUnit,
-    rank: &dyn Fn(&StressTensor) -> Rank,
-) -> Result<Option<Critical>, SourceProblem> {
-    if c.source != Source::Section || !c.has_loads() {
-        return Ok(None);
-    }
-    let s = section(c, n)?;
-    let (loads, pressure, k) = section_loads(c, n, elastic(c, n)?.nu);
-    let to_unit = 1.0 / unit.pascals();
-    let in_unit = |t: &StressTensor| match t.scaled(to_unit) {
-        Ok(t) => rank(&t),
-        Err(_) => Rank {
-            severity: f64::NAN,
-            tie: 0.0,
-        },
-    };
-    let mut g = s
-        .governing(&loads, &pressure, k, SCAN_SAMPLES, &in_unit)
-        .map_err(|e| section_problem(e, c))?;
-    let l = 1.0 / c.length.metres();
-    g.at = location_in(g.at, l);
-    if matches!(g.at, Location::Rectangle { .. }) {
-        g.position *= l;
-        // The search leaves noise of about 1e-12 of the section at a mid-face.
-        if let Location::Rectangle { face, along } = g.at {
-            let size = match s {
-                Section::Rectangle(r) => r.depth().max(r.width()) * l,
-                Section::Round(_) => 1.0,
-            };
-            if along.abs() < 1e-9 * size {
-                g.at = Location::Rectangle { face, along: 0.0 };
-            }
-        }
-    }
-    Ok(Some(g))
-}
-
-fn thin_vessel(
-    c: &Choices,
-    n: &impl Numbers,
-    unit: StressUnit,
-) -> Result<(StressTensor, Outcome), SourceProblem> {
-    if c.ends == Ends::PlaneStrain && c.kind == SectionKind::ThinCylinder {
-        return Err(problem(
-            Num::Pin,
-            "plane-strain ends apply to Lamé cylinders (tube, solid shaft); a thin cylinder has closed or open ends",
-        ));
-    }
-    let m = c.length.metres();
-    let (r, t) = (0.5 * n.get(Num::D) * m, n.get(Num::Wall) * m);
-    let p = n.get(Num::Pin) * c.pressure.pascals();
-    let wall = |inner: bool| match c.kind {
-        SectionKind::ThinSphere => vessel::thin_sphere(p, r, t, inner),
-        _ => vessel::thin_cylinder(p, r, t, c.ends, inner),
-    };
-    let to = |w: vessel::WallStress| {
-        w.tensor()
-            .and_then(|s| s.scaled(1.0 / unit.pascals()))
-            .map_err(|_| problem(Num::Pin, "the result overflows; check the magnitudes"))
-    };
-    let outer = to(wall(false).map_err(vessel_problem)?)?;
-    let inner = to(wall(true).map_err(vessel_problem)?)?;
-    let warnings = vessel::thin_wall_warning(r, t).into_iter().collect();
-    let vm = |s: &StressTensor| stresscase_core::Equivalent::of(s).von_mises;
-    let tensor = if c.surface == Surface::Inner {
-        inner
-    } else {
-        outer
-    };
-    Ok((
-        tensor,
-        Outcome::Section(SectionOutcome {
-            properties: None,
-            scan: None,
-            vessel_surfaces: Some([vm(&outer), vm(&inner)]),
-            warnings,
-        }),
-    ))
 }
 
 /// Numbers as a plain map, for tests of the paths without a form.
