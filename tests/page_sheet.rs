@@ -34,6 +34,28 @@ fn settle(p: &mut Page) {
         .unwrap();
 }
 
+/// Fails when the page is wider than the window, naming the elements that stick out.
+fn no_sideways_scroll(p: &mut Page, what: &str) {
+    let (sw, cw) = (
+        num(p, "document.documentElement.scrollWidth"),
+        num(p, "document.documentElement.clientWidth"),
+    );
+    if sw > cw {
+        let wide = p.text(&format!(
+            "JSON.stringify(Array.from(document.querySelectorAll('body *')).filter(e => e.getBoundingClientRect().right > {cw} + 0.5 && e.getClientRects().length > 0).slice(0, 12).map(e => (e.id || e.className || e.tagName) + ':' + Math.round(e.getBoundingClientRect().right)))"
+        ));
+        panic!("{what}: the page is {sw} px wide in a {cw} px window; too wide: {wide}");
+    }
+}
+
+/// Fails on visible diagram text below 11 CSS px, the drawing's scale and rotation included.
+fn no_small_diagram_text(p: &mut Page, what: &str) {
+    let small = p.text(
+        "JSON.stringify(Array.from(document.querySelectorAll('svg[id] text')).filter(t => t.getClientRects().length > 0 && t.textContent.trim() !== '').map(t => [t.closest('svg').id, t.textContent, parseFloat(getComputedStyle(t).fontSize) * Math.hypot(t.getScreenCTM().a, t.getScreenCTM().b)]).filter(x => x[2] < 10.99))",
+    );
+    assert_eq!(small, "[]", "{what}: diagram text below 11 px: {small}");
+}
+
 /// Checks the headline's figures against the results table.
 fn headline_matches_results(p: &mut Page) {
     for key in KEYS {
@@ -68,23 +90,9 @@ fn the_answer_is_on_the_first_screen_at_every_width() {
             bottom <= f64::from(h),
             "{w}×{h}: the headline ends at {bottom}"
         );
-        // Nothing scrolls sideways.
-        let (sw, cw) = (
-            num(&mut p, "document.documentElement.scrollWidth"),
-            num(&mut p, "document.documentElement.clientWidth"),
-        );
-        if sw > cw {
-            let wide = p.text(&format!(
-                "JSON.stringify(Array.from(document.querySelectorAll('body *')).filter(e => e.getBoundingClientRect().right > {cw} + 0.5 && e.getClientRects().length > 0).slice(0, 12).map(e => (e.id || e.className || e.tagName) + ':' + Math.round(e.getBoundingClientRect().right)))"
-            ));
-            panic!("{w}: the page is {sw} px wide in a {cw} px window; too wide: {wide}");
-        }
-        // No diagram text below 11 CSS px (the drawing's scale included).
-        let small = p.text(
-            "JSON.stringify(Array.from(document.querySelectorAll('svg[id] text')).filter(t => t.getClientRects().length > 0 && t.textContent.trim() !== '').map(t => [t.closest('svg').id, t.textContent, parseFloat(getComputedStyle(t).fontSize) * Math.hypot(t.getScreenCTM().a, t.getScreenCTM().b)]).filter(x => x[2] < 10.99))",
-        );
+        no_sideways_scroll(&mut p, &format!("{w} px"));
         if w <= 400 {
-            assert_eq!(small, "[]", "{w}: diagram text below 11 px: {small}");
+            no_small_diagram_text(&mut p, &format!("{w} px"));
         }
         if w == 1366 {
             // The inputs and the diagram are on screen together.
@@ -117,21 +125,10 @@ fn the_answer_is_on_the_first_screen_at_every_width() {
             p.b.click(button).unwrap();
             p.wait_for_id(drawing);
             settle(&mut p);
-            let (sw, cw) = (
-                num(&mut p, "document.documentElement.scrollWidth"),
-                num(&mut p, "document.documentElement.clientWidth"),
-            );
-            if sw > cw {
-                let wide = p.text(&format!(
-                    "JSON.stringify(Array.from(document.querySelectorAll('body *')).filter(e => e.getBoundingClientRect().right > {cw} + 0.5 && e.getClientRects().length > 0).slice(0, 12).map(e => (e.id || e.className || e.tagName) + ':' + Math.round(e.getBoundingClientRect().right)))"
-                ));
-                panic!("{w}, {button}: the page is {sw} px wide in {cw}; too wide: {wide}");
-            }
-            let small = p.text(
-                "JSON.stringify(Array.from(document.querySelectorAll('svg[id] text')).filter(t => t.getClientRects().length > 0 && t.textContent.trim() !== '').map(t => [t.closest('svg').id, t.textContent, parseFloat(getComputedStyle(t).fontSize) * Math.hypot(t.getScreenCTM().a, t.getScreenCTM().b)]).filter(x => x[2] < 10.99))",
-            );
+            let what = format!("{w} px, {button}");
+            no_sideways_scroll(&mut p, &what);
             if w < 500 {
-                assert_eq!(small, "[]", "{button}: diagram text below 11 px: {small}");
+                no_small_diagram_text(&mut p, &what);
             }
             p.b.screenshot(&target_dir().join(format!("screens/{button}-{w}.png")))
                 .unwrap();
