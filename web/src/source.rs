@@ -787,6 +787,11 @@ pub struct SourceProblem {
     pub message: String,
 }
 
+/// The refusal when a path's result leaves double range, attached to `num`.
+fn overflow(num: Num) -> SourceProblem {
+    problem(num, "the result overflows; check the magnitudes")
+}
+
 fn problem(num: Num, message: impl Into<String>) -> SourceProblem {
     SourceProblem {
         num,

@@ -1,7 +1,7 @@
 //! Strain-gauge rosette readings: the gauges as laid out, the least-squares reduction in core,
 //! and the plane-stress tensor by Hooke's law.
 
-use super::{elastic, problem, Choices, Layout, Num, Numbers, Outcome, SourceProblem};
+use super::{elastic, overflow, problem, Choices, Layout, Num, Numbers, Outcome, SourceProblem};
 use stresscase_core::rosette::{self, Gauge, RosetteError, RosetteStrain, Transverse};
 use stresscase_core::{AngleUnit, StressTensor, StressUnit};
 
@@ -26,7 +26,6 @@ pub fn evaluate(
     angle: AngleUnit,
 ) -> Result<(StressTensor, Outcome), SourceProblem> {
     let to_unit = 1.0 / unit.pascals();
-    let overflow = |num: Num| problem(num, "the result overflows; check the magnitudes");
     let material = elastic(c, n)?.material;
     let s = c.strain_unit.factor();
     let gauges: Vec<Gauge> = (0..c.gauge_count())

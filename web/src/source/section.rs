@@ -3,7 +3,8 @@
 //! spheres. Inputs converted to SI here; results back in the case's units.
 
 use super::{
-    elastic, problem, Choices, Num, Numbers, Outcome, SectionKind, Source, SourceProblem, Surface,
+    elastic, overflow, problem, Choices, Num, Numbers, Outcome, SectionKind, Source, SourceProblem,
+    Surface,
 };
 use stresscase_core::section::{
     Concentration, Critical, Loads, Location, Path, Pressure, Properties, Rank, Rectangle, Round,
@@ -39,7 +40,6 @@ pub fn evaluate(
     angle: AngleUnit,
 ) -> Result<(StressTensor, Outcome), SourceProblem> {
     let to_unit = 1.0 / unit.pascals();
-    let overflow = |num: Num| problem(num, "the result overflows; check the magnitudes");
     if matches!(c.kind, SectionKind::ThinCylinder | SectionKind::ThinSphere) {
         return thin_vessel(c, n, unit);
     }
@@ -300,7 +300,7 @@ fn thin_vessel(
     let to = |w: vessel::WallStress| {
         w.tensor()
             .and_then(|s| s.scaled(1.0 / unit.pascals()))
-            .map_err(|_| problem(Num::Pin, "the result overflows; check the magnitudes"))
+            .map_err(|_| overflow(Num::Pin))
     };
     let outer = to(wall(false).map_err(vessel_problem)?)?;
     let inner = to(wall(true).map_err(vessel_problem)?)?;

@@ -2,7 +2,7 @@
 //! thermal strain α·ΔT.
 
 use super::{
-    elastic, problem, Choices, Condition, ElasticUsed, Num, Numbers, Outcome, SourceProblem,
+    elastic, overflow, Choices, Condition, ElasticUsed, Num, Numbers, Outcome, SourceProblem,
 };
 use stresscase_core::hooke::Strain;
 use stresscase_core::{StressTensor, StressUnit};
@@ -24,7 +24,6 @@ pub fn evaluate(
     unit: StressUnit,
 ) -> Result<(StressTensor, Outcome), SourceProblem> {
     let to_unit = 1.0 / unit.pascals();
-    let overflow = |num: Num| problem(num, "the result overflows; check the magnitudes");
     let ElasticUsed {
         material, thermal, ..
     } = elastic(c, n)?;
