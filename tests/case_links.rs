@@ -9,10 +9,11 @@ use stresscase_core::material;
 use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
 use stresscase_core::{AngleUnit, ShearAxis, StressUnit};
 use stresscase_tests::check::data_path;
-use stresscase_web::case::Mode;
-use stresscase_web::link::{Case, LinkError};
-use stresscase_web::saved::Library;
-use stresscase_web::source::{tokens, Choices, ElasticFrom, MaterialPick, Num};
+use stresscase_web::formats::link::{Case, LinkError};
+use stresscase_web::formats::saved::Library;
+use stresscase_web::model::case::Mode;
+use stresscase_web::model::choices::{tokens, Choices, ElasticFrom, MaterialPick};
+use stresscase_web::model::inputs::Num;
 
 fn expected(v: &Value) -> Case {
     let nums = |k: &str| -> Vec<f64> {

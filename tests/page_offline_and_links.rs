@@ -12,8 +12,8 @@ use stresscase_core::{Principal, StressTensor};
 use stresscase_tests::browser::{fresh_profile, Chromium};
 use stresscase_tests::check::{close, data_path, target_dir};
 use stresscase_tests::page::{dist, Page, WAIT};
-use stresscase_web::link::Case;
-use stresscase_web::saved::Library;
+use stresscase_web::formats::link::Case;
+use stresscase_web::formats::saved::Library;
 
 fn sigma1_of(c: &Case) -> f64 {
     let [a, b, cc, d, e, f] = c.stress;
@@ -38,7 +38,7 @@ fn only_own_origin(p: &Page, origin: &str) {
 
 fn a_3d_case() -> Case {
     let mut c = Case::demo();
-    c.mode = stresscase_web::case::Mode::Full;
+    c.mode = stresscase_web::model::case::Mode::Full;
     c.stress = [120.0, -35.5, 12.0, 48.0, -9.0, 21.0];
     c.title = "Press frame, inner corner R12".into();
     c.note = "Load case B — max clamp force".into();

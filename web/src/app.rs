@@ -1,9 +1,9 @@
 //! The whole page: the case signal, the evaluation memos, and the panels laid out.
 
-use crate::browser::{self, CURRENT_KEY};
-use crate::case::{CaseForm, Evaluation};
-use crate::history::{HistoryAction, HistoryPolicy};
-use crate::link::Case;
+use crate::edge::browser::{self, CURRENT_KEY};
+use crate::edge::history::{HistoryAction, HistoryPolicy};
+use crate::formats::link::Case;
+use crate::model::case::{CaseForm, Evaluation};
 use crate::panels::{
     calc_sheet::{SheetHead, SheetTail},
     case_shelf::CaseShelf,

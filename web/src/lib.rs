@@ -1,16 +1,18 @@
-//! The Stresscase page as a library: the case model, its link and saved-case formats, and the
-//! Leptos panels. `main.rs` only mounts [`app::App`]. Everything outside `app`, `panels` and
-//! `browser` is plain Rust, tested natively and fuzzed.
+//! The Stresscase page as a library, grouped by concern:
+//!
+//! - [`model`]: the case and its paths — reading typed text, the table of typed numbers, where
+//!   the stress comes from, how it is judged, and the validated case. Plain Rust.
+//! - [`formats`]: the two file formats, the case link and the saved-case library. Plain Rust,
+//!   fuzzed.
+//! - [`panels`]: what the user sees, one Leptos component per panel, and the drawing helpers.
+//! - [`edge`]: the browser edge — storage, URL, clipboard, files, and when an edit becomes a
+//!   history entry.
+//!
+//! [`app`] composes them; `main.rs` only mounts [`app::App`]. Imports run one way:
+//! `model` ← `formats` ← `edge` ← `panels` ← `app`.
 
 pub mod app;
-pub mod browser;
-pub mod case;
-pub mod entry;
-pub mod history;
-pub mod judge;
-pub mod link;
-pub mod numfmt;
+pub mod edge;
+pub mod formats;
+pub mod model;
 pub mod panels;
-pub mod plot;
-pub mod saved;
-pub mod source;

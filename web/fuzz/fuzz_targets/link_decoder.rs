@@ -2,7 +2,7 @@
 //! decodes to the same case.
 #![no_main]
 
-use stresscase_web::link::Case;
+use stresscase_web::formats::link::Case;
 
 libfuzzer_sys::fuzz_target!(|data: &[u8]| {
     let text = String::from_utf8_lossy(data);

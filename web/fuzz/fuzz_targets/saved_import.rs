@@ -2,7 +2,7 @@
 //! that imports to the same list.
 #![no_main]
 
-use stresscase_web::saved::Library;
+use stresscase_web::formats::saved::Library;
 
 libfuzzer_sys::fuzz_target!(|data: &[u8]| {
     let text = String::from_utf8_lossy(data);

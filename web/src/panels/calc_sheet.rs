@@ -6,11 +6,13 @@
 //!
 //! [`inputs`], [`assumptions`] and [`qr_path`] are plain functions, tested natively.
 
-use crate::browser;
-use crate::case::{CaseForm, Evaluation, Field, Mode};
-use crate::link::Case;
+use crate::edge::browser;
+use crate::formats::link::Case;
+use crate::model::case::{CaseForm, Evaluation, Field, Mode};
+use crate::model::choices::{tokens, Cycle, Endurance, Source};
+use crate::model::inputs::Num;
+use crate::model::source::Outcome;
 use crate::panels::elastic_entry::describe;
-use crate::source::{tokens, Cycle, Endurance, Num, Outcome, Source};
 use leptos::prelude::*;
 use qrcode::{Color, EcLevel, QrCode};
 use stresscase_core::criteria::{self, Criterion, MohrBranch};
@@ -156,7 +158,7 @@ pub fn assumptions(e: &Evaluation) -> Vec<String> {
     v.push(format!(
         "The material is treated as {} (elongation {} %; 5 % or more is ductile, common practice); {} is the criterion in use.",
         if j.strengths.is_ductile() { "ductile" } else { "brittle" },
-        crate::numfmt::format_sig(j.strengths.elongation(), 3),
+        crate::model::numfmt::format_sig(j.strengths.elongation(), 3),
         j.in_use.name()
     ));
     if let Some(a) = criteria::assumption(j.in_use, &j.strengths) {
@@ -243,8 +245,8 @@ pub fn SheetHead(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
                         "Static, {}: n = {} against the required {} — {}.",
                         j.in_use.name(),
                         v.factor
-                            .map_or_else(|| "∞".into(), |n| crate::numfmt::format_sig(n, 3)),
-                        crate::numfmt::format_sig(j.required, 3),
+                            .map_or_else(|| "∞".into(), |n| crate::model::numfmt::format_sig(n, 3)),
+                        crate::model::numfmt::format_sig(j.required, 3),
                         if v.passes { "passes" } else { "does not pass" }
                     ),
                     None => format!("{} does not apply to {}.", j.in_use.name(), j.name),
@@ -254,7 +256,7 @@ pub fn SheetHead(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
                     s.push_str(&format!(
                         " Fatigue, {}: n = {} — {}.",
                         f.in_use.name(),
-                        n.map_or_else(|| "∞".into(), |n| crate::numfmt::format_sig(n, 3)),
+                        n.map_or_else(|| "∞".into(), |n| crate::model::numfmt::format_sig(n, 3)),
                         if n.is_none_or(|n| n >= j.required) {
                             "passes"
                         } else {

@@ -1,10 +1,10 @@
 //! "Keep and share": the case's title and note, its link (copy to share), and the list of saved
 //! cases with open, rename, duplicate, delete, export to a file and import from one.
 
-use crate::browser::{self, LIBRARY_KEY};
-use crate::case::{CaseForm, Field};
-use crate::link::Case;
-use crate::saved::Library;
+use crate::edge::browser::{self, LIBRARY_KEY};
+use crate::formats::link::Case;
+use crate::formats::saved::Library;
+use crate::model::case::{CaseForm, Field};
 use leptos::html;
 use leptos::prelude::*;
 use leptos::task::spawn_local;

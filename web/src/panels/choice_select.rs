@@ -1,6 +1,6 @@
 //! One labelled drop-down bound to a choice of the case (a unit, a kind, a layout).
 
-use crate::case::CaseForm;
+use crate::model::case::CaseForm;
 use leptos::prelude::*;
 
 /// A select whose value is read by `get` and written by `set` (which also converts whatever

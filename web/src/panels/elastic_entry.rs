@@ -2,11 +2,13 @@
 //! used, the free thermal strain α·ΔT, and a warning when typed values differ from the chosen
 //! material's. [`ElasticNote`] repeats the values used beside the gauge and strain inputs.
 
-use crate::case::{CaseForm, Evaluation};
-use crate::numfmt::format_for_entry;
+use crate::model::case::{CaseForm, Evaluation};
+use crate::model::choices::{tokens, MaterialPick};
+use crate::model::inputs::Num;
+use crate::model::numfmt::format_for_entry;
+use crate::model::source::ElasticUsed;
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::number_field::SourceFields;
-use crate::source::{tokens, ElasticUsed, MaterialPick, Num};
 use leptos::prelude::*;
 use stresscase_core::StressUnit;
 

@@ -1,8 +1,8 @@
 //! "Turn the element": the angle θ, typed or dragged, with jumps to the principal and
 //! maximum-shear faces.
 
-use crate::case::{CaseForm, Evaluation, Field};
-use crate::entry::parse_number;
+use crate::model::case::{CaseForm, Evaluation, Field};
+use crate::model::entry::parse_number;
 use crate::panels::number_field::NumberField;
 use leptos::prelude::*;
 use stresscase_core::AngleUnit;

@@ -1,7 +1,7 @@
 //! "Save as SVG / PNG" under each drawing: the drawing as a self-contained SVG file (the page's
 //! stylesheet embedded) and as a PNG at twice its size on screen.
 
-use crate::browser;
+use crate::edge::browser;
 use leptos::prelude::*;
 
 /// The two buttons for the drawing `#svg_id`; files are named `stresscase-<name>.svg|png`.

@@ -3,15 +3,16 @@
 //! diagram (alternating against mean) with the envelopes, the yield line, the operating point and
 //! its load line.
 
-use crate::case::{CaseForm, Evaluation, Field};
-use crate::judge::{FatigueOutcome, Judgement};
-use crate::numfmt::{format_for_entry, format_sig, RESULT_DIGITS};
+use crate::model::case::{CaseForm, Evaluation, Field};
+use crate::model::choices::{tokens, Cycle, Endurance};
+use crate::model::inputs::Num;
+use crate::model::judge::{FatigueOutcome, Judgement};
+use crate::model::numfmt::{format_for_entry, format_sig, RESULT_DIGITS};
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::export_buttons::ExportButtons;
 use crate::panels::number_field::SourceFields;
+use crate::panels::plot::nice_ticks;
 use crate::panels::stale_notice::StaleBadge;
-use crate::plot::nice_ticks;
-use crate::source::{tokens, Cycle, Endurance, Num};
 use leptos::prelude::*;
 use stresscase_core::fatigue::FatigueCriterion;
 use stresscase_core::StressUnit;
@@ -127,7 +128,7 @@ pub fn picture(j: &Judgement, f: &FatigueOutcome) -> Picture {
 /// Puts the state on screen into the second-state fields (as the minimum or the amplitude).
 fn take_second(f: &mut CaseForm, e: &Evaluation) {
     for (i, v) in (0u8..).zip(e.tensor.components()) {
-        f.set_text(Field::Src(Num::Second(i)), format_for_entry(v));
+        f.set_text(Field::Src(Num::second(i)), format_for_entry(v));
     }
 }
 
@@ -253,7 +254,7 @@ pub fn FatigueCheck(
                         set=|f, v| if let Some(c) = tokens::value(&tokens::CYCLE, v) { f.set_cycle(c); }/>
                     <SourceFields form=form nums=vec![Num::Ratio]/>
                     <div hidden=move || form.with(|f| f.choices.cycle == Cycle::Ratio)>
-                        <SourceFields form=form nums=(0..6).map(Num::Second).collect()/>
+                        <SourceFields form=form nums=(0..6).map(Num::second).collect()/>
                         <div class="buttons">
                             <button type="button" id="take-second" on:click=move |_| shown.with_untracked(|e| if let Some(e) = e { form.update(|f| take_second(f, e)); })>"Take the state on screen"</button>
                         </div>
@@ -325,7 +326,7 @@ mod tests {
         let mut f = CaseForm::demo();
         let e = f.evaluate().unwrap();
         take_second(&mut f, &e);
-        assert_eq!(f.text(Field::Src(Num::Second(0))), "84");
-        assert_eq!(f.text(Field::Src(Num::Second(3))), "37");
+        assert_eq!(f.text(Field::Src(Num::second(0))), "84");
+        assert_eq!(f.text(Field::Src(Num::second(3))), "37");
     }
 }

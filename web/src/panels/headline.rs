@@ -3,8 +3,8 @@
 //! pass or fail, and the fatigue factor when fatigue is on. Each figure is an element with
 //! `data-key` and the unrounded `data-value` in the unit shown.
 
-use crate::case::Evaluation;
-use crate::numfmt::format_sig;
+use crate::model::case::Evaluation;
+use crate::model::numfmt::format_sig;
 use crate::panels::stale_notice::StaleBadge;
 use leptos::prelude::*;
 
@@ -126,7 +126,7 @@ pub fn Headline(
 #[cfg(test)]
 mod tests {
     use super::*;
-    use crate::case::CaseForm;
+    use crate::model::case::CaseForm;
 
     #[test]
     fn the_headline_holds_the_answer_with_units() {
@@ -150,7 +150,7 @@ mod tests {
         assert_eq!(figures(&e)[0].value, e.principal.sigma1());
         f.choices.fatigue = true;
         f.set_text(
-            crate::case::Field::Src(crate::source::Num::Ratio),
+            crate::model::case::Field::Src(crate::model::inputs::Num::Ratio),
             "0".into(),
         );
         let e = f.evaluate().unwrap();

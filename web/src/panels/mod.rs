@@ -1,4 +1,4 @@
-//! One file per panel the user sees, named after it.
+//! One file per panel the user sees, named after it, and `plot`, the drawing helpers they share.
 
 pub mod calc_sheet;
 pub mod case_shelf;
@@ -13,6 +13,7 @@ pub mod link_notice;
 pub mod mohr_diagram;
 pub mod number_field;
 pub mod plane_probe;
+pub mod plot;
 pub mod results;
 pub mod rosette_entry;
 pub mod scan_plot;

@@ -7,11 +7,11 @@
 //! as `data-origin-x`, `data-origin-y` and `data-px-per-unit` so tests can check every circle
 //! against core.
 
-use crate::case::{CaseForm, Evaluation, Mode};
-use crate::numfmt::format_sig;
+use crate::model::case::{CaseForm, Evaluation, Mode};
+use crate::model::numfmt::format_sig;
 use crate::panels::export_buttons::ExportButtons;
+use crate::panels::plot::{nice_ticks, Frame, Viewport};
 use crate::panels::stale_notice::StaleBadge;
-use crate::plot::{nice_ticks, Frame, Viewport};
 use leptos::prelude::*;
 use stresscase_core::{MohrCircle, ShearAxis};
 

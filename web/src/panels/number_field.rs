@@ -1,7 +1,7 @@
 //! One labelled number input that validates as you type and says what is wrong — both a number
 //! that does not read and a value core refuses (e.g. a bore larger than the outside).
 
-use crate::case::{CaseForm, Evaluation, Field, FieldProblem};
+use crate::model::case::{CaseForm, Evaluation, Field, FieldProblem};
 use leptos::prelude::*;
 
 /// The evaluation result the page shares with its fields, so each field can show core's reason
@@ -51,7 +51,10 @@ pub fn NumberField(form: RwSignal<CaseForm>, field: Field) -> impl IntoView {
 /// The fields among `nums` that the case's current path uses, re-drawn only when that set
 /// changes (so typing never rebuilds an input under the cursor).
 #[component]
-pub fn SourceFields(form: RwSignal<CaseForm>, nums: Vec<crate::source::Num>) -> impl IntoView {
+pub fn SourceFields(
+    form: RwSignal<CaseForm>,
+    nums: Vec<crate::model::inputs::Num>,
+) -> impl IntoView {
     let shown = Memo::new(move |_| {
         let active = form.with(|f| f.choices.active());
         nums.iter()

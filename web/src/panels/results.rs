@@ -1,9 +1,9 @@
 //! "Results": every number core gives for the case, grouped, each with its unit. Each value cell
 //! carries `data-key` and the unrounded `data-value` (in the case's unit) for tests and copying.
 
-use crate::case::{Evaluation, Mode};
-use crate::numfmt::{format_decimal_power, format_sig, RESULT_DIGITS};
-use crate::source::Outcome;
+use crate::model::case::{Evaluation, Mode};
+use crate::model::numfmt::{format_decimal_power, format_sig, RESULT_DIGITS};
+use crate::model::source::Outcome;
 use leptos::prelude::*;
 use nalgebra::Vector3;
 use stresscase_core::invariants::Magnitude;
@@ -644,11 +644,15 @@ pub fn ResultsPanel(shown: Memo<Option<Evaluation>>, stale: Memo<bool>) -> impl 
     let status = RwSignal::new(String::new());
     let save_csv = move |_| {
         let text = shown.with_untracked(|e| {
-            e.as_ref()
-                .map(|e| csv(e, &crate::browser::url_with(&crate::browser::hash())))
+            e.as_ref().map(|e| {
+                csv(
+                    e,
+                    &crate::edge::browser::url_with(&crate::edge::browser::hash()),
+                )
+            })
         });
         if let Some(text) = text {
-            let r = crate::browser::download_as("stresscase-results.csv", &text, "text/csv");
+            let r = crate::edge::browser::download_as("stresscase-results.csv", &text, "text/csv");
             status.set(
                 r.err()
                     .map(|e| format!("Not saved: {e}."))
@@ -672,7 +676,7 @@ pub fn ResultsPanel(shown: Memo<Option<Evaluation>>, stale: Memo<bool>) -> impl 
 #[cfg(test)]
 mod tests {
     use super::*;
-    use crate::case::{CaseForm, Field};
+    use crate::model::case::{CaseForm, Field};
 
     #[test]
     fn every_number_has_a_unit_or_is_dimensionless_by_design() {

@@ -1,12 +1,14 @@
 //! "Strain-gauge rosette": layout, gauge angles and readings, the transverse-sensitivity
 //! correction, and a sketch of the rosette as entered (angles from core's reduction).
 
-use crate::case::{CaseForm, Evaluation};
-use crate::numfmt::format_sig;
+use crate::model::case::{CaseForm, Evaluation};
+use crate::model::choices::{tokens, Source, MAX_GAUGES};
+use crate::model::inputs::Num;
+use crate::model::numfmt::format_sig;
+use crate::model::source::Outcome;
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::elastic_entry::ElasticNote;
 use crate::panels::number_field::SourceFields;
-use crate::source::{tokens, Num, Outcome, Source, MAX_GAUGES};
 use leptos::prelude::*;
 use stresscase_core::rosette::Gauge;
 use stresscase_core::units::StrainUnit;
@@ -63,8 +65,9 @@ pub fn RosetteEntry(
     stale: Memo<bool>,
 ) -> impl IntoView {
     let on = Memo::new(move |_| form.with(|f| f.choices.source == Source::Rosette));
-    let custom =
-        Memo::new(move |_| form.with(|f| f.choices.layout == crate::source::Layout::Custom));
+    let custom = Memo::new(move |_| {
+        form.with(|f| f.choices.layout == crate::model::choices::Layout::Custom)
+    });
     let correct = Memo::new(move |_| form.with(|f| f.choices.correct));
     let marks = Memo::new(move |_| {
         shown.with(|e| match e.as_ref().map(|e| (&e.outcome, e.angle_unit)) {
@@ -74,8 +77,8 @@ pub fn RosetteEntry(
     });
     let mut gauge_nums = Vec::new();
     for i in 0..MAX_GAUGES {
-        gauge_nums.push(Num::GaugeAngle(i));
-        gauge_nums.push(Num::GaugeReading(i));
+        gauge_nums.push(Num::gauge_angle(i));
+        gauge_nums.push(Num::gauge_reading(i));
     }
     move || {
         on.get().then(|| {

@@ -5,14 +5,16 @@
 //! [`picture`] turns core's scan into plain drawing data (tested natively); [`ScanPlot`] draws
 //! it. The `<svg>` carries the highest values as `data-max-vm` and `data-max-s1` (case unit).
 
-use crate::case::{CaseForm, Evaluation, Field};
-use crate::judge::Governing;
-use crate::numfmt::{format_for_entry, format_sig};
+use crate::model::case::{CaseForm, Evaluation, Field};
+use crate::model::choices::{SectionKind, Source};
+use crate::model::inputs::Num;
+use crate::model::judge::Governing;
+use crate::model::numfmt::{format_for_entry, format_sig};
+use crate::model::source::{self, Outcome};
 use crate::panels::export_buttons::ExportButtons;
+use crate::panels::plot::nice_ticks;
 use crate::panels::results::location_text;
 use crate::panels::stale_notice::StaleBadge;
-use crate::plot::nice_ticks;
-use crate::source::{self, Num, Outcome, SectionKind, Source};
 use leptos::prelude::*;
 use stresscase_core::section::{Critical, Location, Path, Scan, Section};
 use stresscase_core::AngleUnit;
@@ -188,7 +190,7 @@ pub fn picture(
 
 /// The rectangle of the case in its length unit, if the section is one.
 fn rectangle_of(form: &CaseForm) -> Option<stresscase_core::section::Rectangle> {
-    let case = crate::link::Case::from_form(form).ok()?;
+    let case = crate::formats::link::Case::from_form(form).ok()?;
     let mut c = case.choices;
     // Positions on the plot are in the length unit: build the section in that unit.
     c.length = stresscase_core::units::LengthUnit::M;
@@ -269,8 +271,8 @@ pub fn ScanPlot(
                 let rect = form.with(rectangle_of);
                 let perimeter = rect.map_or(0.0, |r| r.perimeter());
                 let chosen = form.with(|f| {
-                    let case = crate::link::Case::from_form(f).ok()?;
-                    use crate::source::Numbers;
+                    let case = crate::formats::link::Case::from_form(f).ok()?;
+                    use crate::model::source::Numbers;
                     match (rect, f.choices.kind) {
                         (Some(r), _) => Some(r.position_of(f.choices.face, case.get(Num::Along))),
                         (None, _) => Some(
@@ -438,7 +440,7 @@ pub fn ScanPlot(
 #[cfg(test)]
 mod tests {
     use super::*;
-    use crate::source::Choices;
+    use crate::model::choices::Choices;
     use stresscase_core::section::Face;
 
     #[test]

@@ -1,13 +1,15 @@
 //! "Loads on a section": the section kind and size, the loads, pressure and stress concentration
 //! factors, and the point; units for each; the cautions that go with beam formulas.
 
-use crate::case::{CaseForm, Evaluation, Field};
-use crate::link::Case;
-use crate::numfmt::format_for_entry;
+use crate::formats::link::Case;
+use crate::model::case::{CaseForm, Evaluation, Field};
+use crate::model::choices::{tokens, SectionKind, Source, Surface};
+use crate::model::inputs::Num;
+use crate::model::numfmt::format_for_entry;
+use crate::model::source::{self, Outcome};
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::number_field::SourceFields;
 use crate::panels::section_sketch::SectionSketch;
-use crate::source::{self, tokens, Num, Outcome, SectionKind, Source, Surface};
 use leptos::prelude::*;
 use stresscase_core::section::Section;
 use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit};

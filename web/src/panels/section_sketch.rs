@@ -1,9 +1,11 @@
 //! The section as seen from its +x end (x towards the viewer, so y up and z to the left), with
 //! the chosen point and the critical points of the scan marked: where φ and the faces are.
 
-use crate::case::{CaseForm, Evaluation};
-use crate::link::Case;
-use crate::source::{self, Outcome, Source};
+use crate::formats::link::Case;
+use crate::model::case::{CaseForm, Evaluation};
+use crate::model::choices::Source;
+use crate::model::source::{self, Outcome};
+use crate::model::{choices, inputs};
 use leptos::prelude::*;
 use stresscase_core::section::{Face, Location, Section};
 use stresscase_core::units::LengthUnit;
@@ -99,20 +101,20 @@ pub fn SectionSketch(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) 
         let chosen = match (s, c.kind) {
             (Section::Rectangle(_), _) => Location::Rectangle {
                 face: c.face,
-                along: source::Numbers::get(&case, source::Num::Along),
+                along: source::Numbers::get(&case, inputs::Num::Along),
             },
             // A typed radius stays drawable while it is being edited.
-            (Section::Round(r), source::SectionKind::Tube) => Location::Round {
+            (Section::Round(r), choices::SectionKind::Tube) => Location::Round {
                 phi: case
                     .angle_unit
-                    .to_radians(source::Numbers::get(&case, source::Num::Phi)),
-                r: source::Numbers::get(&case, source::Num::R)
+                    .to_radians(source::Numbers::get(&case, inputs::Num::Phi)),
+                r: source::Numbers::get(&case, inputs::Num::R)
                     .clamp(r.inner_radius(), r.outer_radius()),
             },
             (Section::Round(r), _) => Location::Round {
                 phi: case
                     .angle_unit
-                    .to_radians(source::Numbers::get(&case, source::Num::Phi)),
+                    .to_radians(source::Numbers::get(&case, inputs::Num::Phi)),
                 r: r.outer_radius(),
             },
         };

@@ -1,8 +1,8 @@
 //! "Where the stress comes from": typed components, loads on a section, a rosette, or strains.
 
-use crate::case::{CaseForm, Evaluation, Field};
-use crate::numfmt::format_for_entry;
-use crate::source::Source;
+use crate::model::case::{CaseForm, Evaluation, Field};
+use crate::model::choices::Source;
+use crate::model::numfmt::format_for_entry;
 use leptos::prelude::*;
 
 /// Switches the path. Going back to typed components starts from the tensor on screen, so a
@@ -56,7 +56,7 @@ pub fn SourcePick(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> 
 #[cfg(test)]
 mod tests {
     use super::*;
-    use crate::case::Mode;
+    use crate::model::case::Mode;
 
     #[test]
     fn back_to_typed_keeps_the_derived_tensor() {

@@ -2,12 +2,12 @@
 //! diagram (ε along the axis, γ/2 on the other, same shear-axis choice), with each gauge's
 //! direction on the circle (filled) and its reading (open) so a residual shows as a gap.
 
-use crate::case::Evaluation;
-use crate::numfmt::format_sig;
+use crate::model::case::Evaluation;
+use crate::model::numfmt::format_sig;
+use crate::model::source::Outcome;
 use crate::panels::export_buttons::ExportButtons;
+use crate::panels::plot::{nice_ticks, Frame, Viewport};
 use crate::panels::stale_notice::StaleBadge;
-use crate::plot::{nice_ticks, Frame, Viewport};
-use crate::source::Outcome;
 use leptos::prelude::*;
 use stresscase_core::MohrCircle;
 

@@ -1,11 +1,12 @@
 //! "Strains (Hooke's law)": a strain state — measured, or from another analysis — turned into
 //! stress under plane stress, plane strain or in full 3D.
 
-use crate::case::{CaseForm, Evaluation};
+use crate::model::case::{CaseForm, Evaluation};
+use crate::model::choices::{tokens, Source};
+use crate::model::inputs::Num;
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::elastic_entry::ElasticNote;
 use crate::panels::number_field::SourceFields;
-use crate::source::{tokens, Num, Source};
 use leptos::prelude::*;
 use stresscase_core::units::StrainUnit;
 

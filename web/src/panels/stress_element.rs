@@ -1,8 +1,8 @@
 //! "Element": the square element turned by θ with its normal and shear stresses drawn as arrows,
 //! scaled to the largest of them and pointing the way each stress acts.
 
-use crate::case::{Evaluation, Mode};
-use crate::numfmt::format_sig;
+use crate::model::case::{Evaluation, Mode};
+use crate::model::numfmt::format_sig;
 use crate::panels::export_buttons::ExportButtons;
 use crate::panels::stale_notice::StaleBadge;
 use leptos::prelude::*;
@@ -199,7 +199,7 @@ fn draw(e: &Evaluation, p: &ElementPicture) -> impl IntoView {
 #[cfg(test)]
 mod tests {
     use super::*;
-    use crate::case::{CaseForm, Field};
+    use crate::model::case::{CaseForm, Field};
 
     fn form_with(sx: &str, sy: &str, txy: &str, angle: &str) -> Evaluation {
         let mut f = CaseForm::demo();

@@ -1,9 +1,9 @@
 //! "Stress at the point": mode, unit and the six components.
 
-use crate::case::{CaseForm, Evaluation, Field, Mode};
-use crate::numfmt::{format_sig, RESULT_DIGITS};
+use crate::model::case::{CaseForm, Evaluation, Field, Mode};
+use crate::model::choices::Source;
+use crate::model::numfmt::{format_sig, RESULT_DIGITS};
 use crate::panels::number_field::NumberField;
-use crate::source::Source;
 use leptos::prelude::*;
 use stresscase_core::StressUnit;
 

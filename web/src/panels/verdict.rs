@@ -5,15 +5,16 @@
 //! [`picture`] builds the envelope plot as plain data (tested natively); the `<svg>` carries its
 //! map as `data-origin-x`, `data-origin-y` and `data-px-per-unit`.
 
-use crate::case::{CaseForm, Evaluation, Field, Mode};
-use crate::judge::Judgement;
-use crate::numfmt::{format_for_entry, format_sig, RESULT_DIGITS};
+use crate::model::case::{CaseForm, Evaluation, Field, Mode};
+use crate::model::choices::{tokens, ElasticFrom, MaterialPick};
+use crate::model::inputs::Num;
+use crate::model::judge::Judgement;
+use crate::model::numfmt::{format_for_entry, format_sig, RESULT_DIGITS};
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::export_buttons::ExportButtons;
 use crate::panels::number_field::SourceFields;
+use crate::panels::plot::{nice_ticks, Frame, Viewport};
 use crate::panels::stale_notice::StaleBadge;
-use crate::plot::{nice_ticks, Frame, Viewport};
-use crate::source::{tokens, ElasticFrom, MaterialPick, Num};
 use leptos::prelude::*;
 use stresscase_core::criteria::{self, Criterion, MohrBranch};
 use stresscase_core::material::{self, Basis};

@@ -1,7 +1,9 @@
 //! Strain-gauge rosette readings: the gauges as laid out, the least-squares reduction in core,
 //! and the plane-stress tensor by Hooke's law.
 
-use super::{elastic, overflow, problem, Choices, Layout, Num, Numbers, Outcome, SourceProblem};
+use super::{elastic, overflow, problem, Numbers, Outcome, SourceProblem};
+use crate::model::choices::{Choices, Layout};
+use crate::model::inputs::Num;
 use stresscase_core::rosette::{self, Gauge, RosetteError, RosetteStrain, Transverse};
 use stresscase_core::{AngleUnit, StressTensor, StressUnit};
 
@@ -33,9 +35,9 @@ pub fn evaluate(
             angle: match c.layout {
                 Layout::Rectangular => rosette::RECTANGULAR[usize::from(i)],
                 Layout::Delta => rosette::DELTA[usize::from(i)],
-                Layout::Custom => angle.to_radians(n.get(Num::GaugeAngle(i))),
+                Layout::Custom => angle.to_radians(n.get(Num::gauge_angle(i))),
             },
-            strain: n.get(Num::GaugeReading(i)) * s,
+            strain: n.get(Num::gauge_reading(i)) * s,
         })
         .collect();
     let transverse = c.correct.then(|| Transverse {
@@ -44,16 +46,16 @@ pub fn evaluate(
     });
     let strain = rosette::reduce(&gauges, transverse).map_err(|e| {
         let num = match e {
-            RosetteError::NonFinite(i) => Num::GaugeReading(u8::try_from(i).unwrap_or(0)),
+            RosetteError::NonFinite(i) => Num::gauge_reading(u8::try_from(i).unwrap_or(0)),
             RosetteError::BadTransverse => Num::GaugeKt,
-            _ if c.layout == Layout::Custom => Num::GaugeAngle(0),
-            _ => Num::GaugeReading(0),
+            _ if c.layout == Layout::Custom => Num::gauge_angle(0),
+            _ => Num::gauge_reading(0),
         };
         problem(num, e.to_string())
     })?;
     let tensor = strain
         .stress(&material)
         .and_then(|t| t.scaled(to_unit))
-        .map_err(|_| overflow(Num::GaugeReading(0)))?;
+        .map_err(|_| overflow(Num::gauge_reading(0)))?;
     Ok((tensor, Outcome::Rosette(RosetteOutcome { gauges, strain })))
 }

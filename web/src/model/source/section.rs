@@ -2,10 +2,9 @@
 //! (the tensor at the chosen point, the scan, the governing search), and thin cylinders and
 //! spheres. Inputs converted to SI here; results back in the case's units.
 
-use super::{
-    elastic, overflow, problem, Choices, Num, Numbers, Outcome, SectionKind, Source, SourceProblem,
-    Surface,
-};
+use super::{elastic, overflow, problem, Numbers, Outcome, SourceProblem};
+use crate::model::choices::{Choices, SectionKind, Source, Surface};
+use crate::model::inputs::Num;
 use stresscase_core::section::{
     Concentration, Critical, Loads, Location, Path, Pressure, Properties, Rank, Rectangle, Round,
     Scan, Section, SectionError, SAINT_VENANT,

@@ -1,12 +1,11 @@
 //! The case on screen as plain data: what the user typed (strings), the choices made, and the
 //! evaluation that core returns for it. No browser types here, so all of it is tested natively.
 
-use crate::entry::parse_number;
-use crate::numfmt::{format_for_entry, write_number};
-use crate::source::{
-    self, Choices, Cycle, ElasticFrom, ElasticUsed, MaterialPick, Num, Numbers, Outcome, Quantity,
-    Source,
-};
+use crate::model::choices::{Choices, Cycle, ElasticFrom, MaterialPick, Source};
+use crate::model::entry::parse_number;
+use crate::model::inputs::{Num, Quantity};
+use crate::model::numfmt::{format_for_entry, write_number};
+use crate::model::source::{self, ElasticUsed, Numbers, Outcome};
 use nalgebra::Vector3;
 use std::collections::BTreeMap;
 use stresscase_core::equivalent::Equivalent;
@@ -96,7 +95,7 @@ impl Case {
             if !form.is_active(field) {
                 return 0.0;
             }
-            crate::case::read_field(field, form.text(field)).unwrap_or_else(|message| {
+            crate::model::case::read_field(field, form.text(field)).unwrap_or_else(|message| {
                 problems.push(FieldProblem { field, message });
                 0.0
             })
@@ -136,7 +135,7 @@ impl Case {
         // The user's own material has no elastic constants: they are typed.
         let mut choices = form.choices;
         if choices.material == MaterialPick::Own {
-            choices.elastic = crate::source::ElasticFrom::Typed;
+            choices.elastic = crate::model::choices::ElasticFrom::Typed;
         }
         Ok(Self {
             title: form.title.clone(),
@@ -403,7 +402,7 @@ impl CaseForm {
     pub fn set_cycle(&mut self, to: Cycle) {
         if to != self.choices.cycle {
             for i in 0..6 {
-                self.nums.insert(Num::Second(i), String::new());
+                self.nums.insert(Num::second(i), String::new());
             }
         }
         self.choices.cycle = to;
@@ -624,9 +623,9 @@ impl Case {
             .scaled(self.unit.pascals())
             .map(|t| elastic.material.strain(&t, elastic.thermal))
             .map_err(|e| fail(Field::Sx, e))?;
-        let judgement =
-            crate::judge::judge(&self.choices, self, &tensor, self.unit).map_err(from_source)?;
-        let governing = crate::judge::governing(&self.choices, self, self.unit, &judgement)
+        let judgement = crate::model::judge::judge(&self.choices, self, &tensor, self.unit)
+            .map_err(from_source)?;
+        let governing = crate::model::judge::governing(&self.choices, self, self.unit, &judgement)
             .map_err(from_source)?;
         let theta = self.angle_unit.to_radians(angle);
         let probe = PlaneTraction::on(&tensor, Vector3::new(n[0], n[1], n[2]))
@@ -684,7 +683,7 @@ impl Case {
 /// The reason, in words.
 pub fn read_field(field: Field, text: &str) -> Result<f64, String> {
     parse_number(text).map_err(|e| match field {
-        Field::Src(Num::Second(_)) if text.trim().is_empty() => {
+        Field::Src(n) if n.is_second() && text.trim().is_empty() => {
             "not given yet: type it, or press “Take the state on screen”".to_string()
         }
         _ => e.to_string(),
@@ -722,9 +721,9 @@ pub struct Evaluation {
     /// The elastic constants used, and where they come from.
     pub elastic: ElasticUsed,
     /// The material's verdict on this state, and the fatigue check.
-    pub judgement: crate::judge::Judgement,
+    pub judgement: crate::model::judge::Judgement,
     /// Sections: where on the section the decision is hardest.
-    pub governing: Option<crate::judge::Governing>,
+    pub governing: Option<crate::model::judge::Governing>,
     /// Shear plotting convention.
     pub shear_axis: ShearAxis,
     /// The validated tensor.
@@ -831,7 +830,7 @@ mod tests {
     fn source_unit_changes_keep_the_stress() {
         let mut f = CaseForm::demo();
         f.choices.source = Source::Section;
-        f.choices.kind = source::SectionKind::Tube;
+        f.choices.kind = crate::model::choices::SectionKind::Tube;
         let before = f.evaluate().unwrap().tensor;
         f.change_length_unit(LengthUnit::In);
         f.change_force_unit(ForceUnit::Lbf);
@@ -856,7 +855,7 @@ mod tests {
     fn a_core_refusal_is_attached_to_its_field() {
         let mut f = CaseForm::demo();
         f.choices.source = Source::Section;
-        f.choices.kind = source::SectionKind::Tube;
+        f.choices.kind = crate::model::choices::SectionKind::Tube;
         f.set_text(Field::Src(Num::Di), "45".into());
         let errs = f.evaluate().unwrap_err();
         assert_eq!(errs[0].field, Field::Src(Num::Di));

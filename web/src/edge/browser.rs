@@ -288,11 +288,11 @@ pub async fn read_chosen_file(input: &web_sys::HtmlInputElement) -> Result<Strin
         .files()
         .and_then(|f| f.get(0))
         .ok_or("no file chosen")?;
-    if file.size() > crate::saved::MAX_FILE as f64 {
+    if file.size() > crate::formats::saved::MAX_FILE as f64 {
         return Err(format!(
             "the file is {} bytes; saved cases files are at most {}",
             file.size(),
-            crate::saved::MAX_FILE
+            crate::formats::saved::MAX_FILE
         ));
     }
     let text = wasm_bindgen_futures::JsFuture::from(file.text())

@@ -32,12 +32,11 @@
 //! number, a text with `<script` or `javascript:`, or a link over 32 KiB is refused with
 //! a [`LinkError`] naming the problem. Nothing in a link is ever run or inserted as markup.
 
-pub use crate::case::Case;
-use crate::case::{check_text, Mode, MAX_NOTE, MAX_TITLE, ZERO_NORMAL};
-use crate::numfmt::write_number;
-use crate::source::{
-    tokens, Choices, Endurance, Layout, MaterialPick, Num, Source, ELASTIC, MAX_GAUGES,
-};
+pub use crate::model::case::Case;
+use crate::model::case::{check_text, Mode, MAX_NOTE, MAX_TITLE, ZERO_NORMAL};
+use crate::model::choices::{tokens, Choices, Endurance, Layout, MaterialPick, Source, MAX_GAUGES};
+use crate::model::inputs::{Num, ELASTIC};
+use crate::model::numfmt::write_number;
 use core::fmt;
 use percent_encoding::{percent_decode_str, utf8_percent_encode, AsciiSet, NON_ALPHANUMERIC};
 use std::collections::BTreeMap;
@@ -410,7 +409,7 @@ fn all_keys() -> Vec<&'static str> {
 
 /// The choice keys a case uses, with their values, in link order.
 fn choice_pairs(c: &Choices) -> Vec<(&'static str, String)> {
-    use crate::source::SectionKind as K;
+    use crate::model::choices::SectionKind as K;
     let mut v: Vec<(&'static str, String)> = Vec::new();
     match c.source {
         Source::Typed => {}
@@ -705,7 +704,7 @@ fn read_choices<'a>(take: &impl Fn(&'static str) -> Option<&'a str>) -> Result<C
             d.fatigue_criterion,
         )?,
     };
-    if c.ends == Ends::PlaneStrain && c.kind == crate::source::SectionKind::ThinCylinder {
+    if c.ends == Ends::PlaneStrain && c.kind == crate::model::choices::SectionKind::ThinCylinder {
         return Err(LinkError::BadChoice(
             "ends",
             "pstrain".into(),
@@ -768,7 +767,7 @@ mod tests {
             c.choices = Choices {
                 source,
                 kind: if source == Source::Section {
-                    crate::source::SectionKind::Tube
+                    crate::model::choices::SectionKind::Tube
                 } else {
                     Choices::default().kind
                 },
@@ -785,7 +784,7 @@ mod tests {
                 correct: source == Source::Rosette,
                 material: MaterialPick::Own,
                 fatigue: true,
-                cycle: crate::source::Cycle::Minimum,
+                cycle: crate::model::choices::Cycle::Minimum,
                 endurance: Endurance::Given,
                 ..Choices::default()
             };
@@ -856,7 +855,7 @@ mod tests {
     }
 
     fn arb_choices() -> impl Strategy<Value = Choices> {
-        use crate::source::{Condition, Layout, Surface};
+        use crate::model::choices::{Condition, Layout, Surface};
         use stresscase_core::section::Face;
         use stresscase_core::vessel::Ends;
         (
@@ -1004,7 +1003,7 @@ mod tests {
                 if !used.contains(&"fcrit") {
                     c.fatigue_criterion = d.fatigue_criterion;
                 }
-                if c.kind == crate::source::SectionKind::ThinCylinder {
+                if c.kind == crate::model::choices::SectionKind::ThinCylinder {
                     c.ends = Ends::Closed;
                 }
                 c

@@ -6,11 +6,11 @@
 //!   "cases": [ { "name": "Lug weld, top", "case": "v=1&mode=plane&unit=MPa&sx=84&…" } ] }
 //! ```
 //!
-//! Each `case` is a case link (see [`crate::link`]), so a saved case and a shared link are one
+//! Each `case` is a case link (see [`crate::formats::link`]), so a saved case and a shared link are one
 //! format, validated by one decoder. An import is all or nothing: the first bad entry refuses
 //! the whole file with its reason, and the list is left as it was.
 
-use crate::link::{Case, LinkError};
+use crate::formats::link::{Case, LinkError};
 use core::fmt;
 use serde::{Deserialize, Serialize};
 

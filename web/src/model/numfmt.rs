@@ -122,7 +122,7 @@ mod tests {
             123456789012.0,
         ] {
             let s = format_for_entry(v);
-            let back = crate::entry::parse_number(&s).unwrap();
+            let back = crate::model::entry::parse_number(&s).unwrap();
             assert!((back - v).abs() <= 1e-11 * v.abs(), "{v} -> {s}");
         }
         assert_eq!(format_for_entry(0.30000000000000004), "0.3");

@@ -2,7 +2,9 @@
 //! factor of safety against the required one, and the fatigue check of a cycle whose first state
 //! is the one on screen. No formula here: every number comes from `stresscase-core`.
 
-use crate::source::{self, Cycle, Endurance, MaterialPick, Num, Numbers, Source, SourceProblem};
+use crate::model::choices::{Cycle, Endurance, MaterialPick, Source};
+use crate::model::inputs::Num;
+use crate::model::source::{self, Numbers, SourceProblem};
 use stresscase_core::criteria::{self, Criterion, Verdict};
 use stresscase_core::fatigue::{self, FatigueCriterion, FatigueError, Marin};
 use stresscase_core::invariants::mean_stress;
@@ -10,7 +12,7 @@ use stresscase_core::material::{self, Basis, MaterialError, Strengths};
 use stresscase_core::section::{Critical, Rank};
 use stresscase_core::{principal_values, StressTensor, StressUnit};
 
-use crate::source::Choices;
+use crate::model::choices::Choices;
 
 /// The fatigue part of a judgement, stresses in the case's unit.
 #[derive(Debug, Clone, PartialEq)]
@@ -326,14 +328,14 @@ fn fatigue_check(
     let overflow = |num| problem(num, "the cycle overflows; check the magnitudes");
     let second = || {
         StressTensor::new(
-            n.get(Num::Second(0)),
-            n.get(Num::Second(1)),
-            n.get(Num::Second(2)),
-            n.get(Num::Second(3)),
-            n.get(Num::Second(4)),
-            n.get(Num::Second(5)),
+            n.get(Num::second(0)),
+            n.get(Num::second(1)),
+            n.get(Num::second(2)),
+            n.get(Num::second(3)),
+            n.get(Num::second(4)),
+            n.get(Num::second(5)),
         )
-        .map_err(|_| overflow(Num::Second(0)))
+        .map_err(|_| overflow(Num::second(0)))
     };
     let ratio = (c.cycle == Cycle::Ratio).then(|| n.get(Num::Ratio));
     let cycle = match c.cycle {
@@ -349,7 +351,7 @@ fn fatigue_check(
             fatigue::Cycle::from_extremes(tensor, &min).map_err(|_| overflow(Num::Ratio))?
         }
         Cycle::Minimum => fatigue::Cycle::from_extremes(tensor, &second()?)
-            .map_err(|_| overflow(Num::Second(0)))?,
+            .map_err(|_| overflow(Num::second(0)))?,
         Cycle::Alternating => fatigue::Cycle {
             mean: *tensor,
             alternating: second()?,
@@ -424,7 +426,7 @@ fn fatigue_check(
 #[cfg(test)]
 mod tests {
     use super::*;
-    use crate::source::test_numbers::demo;
+    use crate::model::source::test_numbers::demo;
 
     #[test]
     fn a_table_material_is_judged_in_the_case_unit() {

@@ -1,9 +1,9 @@
 //! A strain state through Hooke's law: plane stress, plane strain or full 3D, with the free
 //! thermal strain α·ΔT.
 
-use super::{
-    elastic, overflow, Choices, Condition, ElasticUsed, Num, Numbers, Outcome, SourceProblem,
-};
+use super::{elastic, overflow, ElasticUsed, Numbers, Outcome, SourceProblem};
+use crate::model::choices::{Choices, Condition};
+use crate::model::inputs::Num;
 use stresscase_core::hooke::Strain;
 use stresscase_core::{StressTensor, StressUnit};
 

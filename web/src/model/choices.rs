@@ -1,0 +1,355 @@
+//! The choices of a case (as opposed to its typed numbers): the path, the section kind, the
+//! units, the rosette layout, the Hooke's-law condition, the material, the criterion and the
+//! fatigue settings, with the token each has in a case link. Plain data; no formula.
+
+use stresscase_core::criteria::Criterion;
+use stresscase_core::fatigue::{FatigueCriterion, Loading, Surface as FatSurface};
+use stresscase_core::material;
+use stresscase_core::section::Face;
+use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
+use stresscase_core::vessel::Ends;
+use stresscase_core::StressUnit;
+
+/// Where the stress tensor comes from.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Source {
+    /// The six components typed in.
+    #[default]
+    Typed,
+    /// Loads on a section (or a pressure vessel).
+    Section,
+    /// Strain-gauge rosette readings.
+    Rosette,
+    /// A strain state, through Hooke's law.
+    Strain,
+}
+
+/// The section kinds the page offers.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum SectionKind {
+    /// Solid round shaft.
+    #[default]
+    SolidRound,
+    /// Tube, thick or thin (Lamé for pressure).
+    Tube,
+    /// Solid rectangle.
+    Rectangle,
+    /// Thin-walled cylinder under internal pressure.
+    ThinCylinder,
+    /// Thin-walled sphere under internal pressure.
+    ThinSphere,
+}
+
+/// Which surface of a thin vessel.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Surface {
+    /// Outside (σr = 0).
+    #[default]
+    Outer,
+    /// Inside (σr = −p).
+    Inner,
+}
+
+/// Rosette gauge layout.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Layout {
+    /// 0°, 45°, 90°.
+    #[default]
+    Rectangular,
+    /// 0°, 60°, 120°.
+    Delta,
+    /// Angles typed by the user, 3 to 8 gauges.
+    Custom,
+}
+
+/// The condition Hooke's law is applied under.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Condition {
+    /// Plane stress: εx, εy, γxy given; σz = 0.
+    #[default]
+    PlaneStress,
+    /// Plane strain: εz = γyz = γzx = 0.
+    PlaneStrain,
+    /// All six strains given.
+    Full,
+}
+
+/// Where the elastic constants E, ν and α come from.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum ElasticFrom {
+    /// The chosen built-in material's E, ν and α (the user's own material has none: typed).
+    Material,
+    /// Typed by the user. The default when a link says nothing (links written before the
+    /// material supplied them carry their E, ν and α, or mean 200 GPa, 0.3 and 12 µε/K).
+    #[default]
+    Typed,
+}
+
+/// Most gauges a rosette may have on the page.
+pub const MAX_GAUGES: u8 = 8;
+
+/// Every choice (as opposed to a typed number) of the source paths.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub struct Choices {
+    /// The path.
+    pub source: Source,
+    /// Section kind.
+    pub kind: SectionKind,
+    /// Length unit of section dimensions and positions.
+    pub length: LengthUnit,
+    /// Force unit.
+    pub force: ForceUnit,
+    /// Moment unit.
+    pub moment: MomentUnit,
+    /// Pressure unit.
+    pub pressure: StressUnit,
+    /// Closed or open ends (pressure end load).
+    pub ends: Ends,
+    /// Rectangle face of the point.
+    pub face: Face,
+    /// Thin-vessel surface of the point.
+    pub surface: Surface,
+    /// Rosette layout.
+    pub layout: Layout,
+    /// Gauges in a custom rosette (3..=8).
+    pub gauges: u8,
+    /// Unit of gauge readings and strains.
+    pub strain_unit: StrainUnit,
+    /// Apply the transverse-sensitivity correction.
+    pub correct: bool,
+    /// Hooke's-law condition for the strain path.
+    pub condition: Condition,
+    /// Unit of Young's modulus.
+    pub modulus_unit: StressUnit,
+    /// Where E, ν and α come from.
+    pub elastic: ElasticFrom,
+    /// The material: a built-in row (index into `material::TABLE`) or the user's own.
+    pub material: MaterialPick,
+    /// Unit of the user's strengths and of a given endurance limit.
+    pub strength_unit: StressUnit,
+    /// The static criterion in use; `None` follows the material's ductility.
+    pub criterion: Option<Criterion>,
+    /// Whether the fatigue check is on.
+    pub fatigue: bool,
+    /// How the cycle's second state is given.
+    pub cycle: Cycle,
+    /// Endurance limit given, or estimated with Marin factors.
+    pub endurance: Endurance,
+    /// Surface finish for ka.
+    pub finish: FatSurface,
+    /// Loading for kb and kc.
+    pub loading: Loading,
+    /// The fatigue criterion whose factor is the fatigue verdict (first-cycle yield is always
+    /// judged beside it).
+    pub fatigue_criterion: FatigueCriterion,
+}
+
+/// The material of the case.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum MaterialPick {
+    /// A row of the built-in table.
+    Table(usize),
+    /// The user's own strengths.
+    Own,
+}
+
+/// How the second state of the fatigue cycle is given; the state on screen is the first.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Cycle {
+    /// The state on screen is the maximum; the minimum is R times it.
+    #[default]
+    Ratio,
+    /// The state on screen is the maximum; the minimum is typed or taken from the screen.
+    Minimum,
+    /// The state on screen is the mean; the alternating amplitude is typed or taken.
+    Alternating,
+}
+
+/// Where the endurance limit comes from.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Endurance {
+    /// Estimated for a steel: Se′ = 0.5 Sut with Marin factors.
+    #[default]
+    Estimate,
+    /// Typed by the user.
+    Given,
+}
+
+impl Default for Choices {
+    fn default() -> Self {
+        Self {
+            source: Source::Typed,
+            kind: SectionKind::SolidRound,
+            length: LengthUnit::Mm,
+            force: ForceUnit::KN,
+            moment: MomentUnit::Nm,
+            pressure: StressUnit::MPa,
+            ends: Ends::Closed,
+            face: Face::PosY,
+            surface: Surface::Inner,
+            layout: Layout::Rectangular,
+            gauges: 4,
+            strain_unit: StrainUnit::Micro,
+            correct: false,
+            condition: Condition::PlaneStress,
+            modulus_unit: StressUnit::GPa,
+            elastic: ElasticFrom::Typed,
+            material: MaterialPick::Table(0),
+            strength_unit: StressUnit::MPa,
+            criterion: None,
+            fatigue: false,
+            cycle: Cycle::Ratio,
+            endurance: Endurance::Estimate,
+            finish: FatSurface::Machined,
+            loading: Loading::Bending,
+            fatigue_criterion: FatigueCriterion::Goodman,
+        }
+    }
+}
+
+impl Choices {
+    /// Whether E, ν and α are typed: chosen so, or the material is the user's own (which has
+    /// no elastic constants of its own).
+    #[must_use]
+    pub fn elastic_typed(&self) -> bool {
+        self.elastic == ElasticFrom::Typed || self.material == MaterialPick::Own
+    }
+
+    /// The built-in material row, if one is chosen.
+    #[must_use]
+    pub fn table_material(&self) -> Option<&'static material::TableMaterial> {
+        match self.material {
+            MaterialPick::Table(i) => material::TABLE.get(i),
+            MaterialPick::Own => None,
+        }
+    }
+
+    /// Gauges in use.
+    #[must_use]
+    pub fn gauge_count(&self) -> u8 {
+        match self.layout {
+            Layout::Rectangular | Layout::Delta => 3,
+            Layout::Custom => self.gauges.clamp(3, MAX_GAUGES),
+        }
+    }
+
+    /// Whether the section takes force and moment loads (not the thin vessels).
+    #[must_use]
+    pub fn has_loads(&self) -> bool {
+        !matches!(
+            self.kind,
+            SectionKind::ThinCylinder | SectionKind::ThinSphere
+        )
+    }
+}
+
+/// Token tables for the choices, shared by the link writer and reader and the page's selects.
+pub mod tokens {
+    use super::{Condition, Cycle, ElasticFrom, Endurance, Layout, SectionKind, Source, Surface};
+    use stresscase_core::criteria::Criterion;
+    use stresscase_core::fatigue::{FatigueCriterion, Loading, Surface as FatSurface};
+    use stresscase_core::section::Face;
+    use stresscase_core::vessel::Ends;
+
+    /// `src`.
+    pub const SOURCE: [(Source, &str); 4] = [
+        (Source::Typed, "typed"),
+        (Source::Section, "section"),
+        (Source::Rosette, "rosette"),
+        (Source::Strain, "strain"),
+    ];
+    /// `kind`.
+    pub const KIND: [(SectionKind, &str); 5] = [
+        (SectionKind::SolidRound, "shaft"),
+        (SectionKind::Tube, "tube"),
+        (SectionKind::Rectangle, "rect"),
+        (SectionKind::ThinCylinder, "thincyl"),
+        (SectionKind::ThinSphere, "thinsph"),
+    ];
+    /// `ends` (plane strain only for Lamé cylinders: tube and solid shaft).
+    pub const ENDS: [(Ends, &str); 3] = [
+        (Ends::Closed, "closed"),
+        (Ends::Open, "open"),
+        (Ends::PlaneStrain, "pstrain"),
+    ];
+    /// `ec`: where E, ν and α come from.
+    pub const ELASTIC_FROM: [(ElasticFrom, &str); 2] = [
+        (ElasticFrom::Material, "mat"),
+        (ElasticFrom::Typed, "typed"),
+    ];
+    /// `fcrit`: the fatigue criterion in use.
+    pub const FATIGUE_CRITERION: [(FatigueCriterion, &str); 4] = [
+        (FatigueCriterion::Goodman, "goodman"),
+        (FatigueCriterion::Gerber, "gerber"),
+        (FatigueCriterion::AsmeElliptic, "asme"),
+        (FatigueCriterion::Soderberg, "soderberg"),
+    ];
+    /// `face`.
+    pub const FACE: [(Face, &str); 4] = [
+        (Face::PosY, "+y"),
+        (Face::PosZ, "+z"),
+        (Face::NegY, "-y"),
+        (Face::NegZ, "-z"),
+    ];
+    /// `surf`.
+    pub const SURFACE: [(Surface, &str); 2] =
+        [(Surface::Outer, "outer"), (Surface::Inner, "inner")];
+    /// `layout`.
+    pub const LAYOUT: [(Layout, &str); 3] = [
+        (Layout::Rectangular, "rect"),
+        (Layout::Delta, "delta"),
+        (Layout::Custom, "any"),
+    ];
+    /// `cond`.
+    pub const CONDITION: [(Condition, &str); 3] = [
+        (Condition::PlaneStress, "pstress"),
+        (Condition::PlaneStrain, "pstrain"),
+        (Condition::Full, "3d"),
+    ];
+
+    /// `crit`.
+    pub const CRITERION: [(Option<Criterion>, &str); 6] = [
+        (None, "auto"),
+        (Some(Criterion::VonMises), "vm"),
+        (Some(Criterion::Tresca), "tresca"),
+        (Some(Criterion::MaxNormal), "normal"),
+        (Some(Criterion::CoulombMohr), "cm"),
+        (Some(Criterion::ModifiedMohr), "mm"),
+    ];
+    /// `cyc`.
+    pub const CYCLE: [(Cycle, &str); 3] = [
+        (Cycle::Ratio, "ratio"),
+        (Cycle::Minimum, "min"),
+        (Cycle::Alternating, "alt"),
+    ];
+    /// `sem`.
+    pub const ENDURANCE: [(Endurance, &str); 2] = [
+        (Endurance::Estimate, "estimate"),
+        (Endurance::Given, "given"),
+    ];
+    /// `fsurf`.
+    pub const FINISH: [(FatSurface, &str); 4] = [
+        (FatSurface::Ground, "ground"),
+        (FatSurface::Machined, "machined"),
+        (FatSurface::HotRolled, "hotrolled"),
+        (FatSurface::AsForged, "forged"),
+    ];
+    /// `fload`.
+    pub const LOADING: [(Loading, &str); 3] = [
+        (Loading::Bending, "bending"),
+        (Loading::Axial, "axial"),
+        (Loading::Torsion, "torsion"),
+    ];
+
+    /// The token of `v` in `table`.
+    #[must_use]
+    pub fn token<T: PartialEq + Copy>(table: &[(T, &'static str)], v: T) -> &'static str {
+        table.iter().find(|(x, _)| *x == v).map_or("", |(_, t)| t)
+    }
+
+    /// The value of token `t` in `table`.
+    #[must_use]
+    pub fn value<T: Copy>(table: &[(T, &'static str)], t: &str) -> Option<T> {
+        table.iter().find(|(_, s)| *s == t).map(|(x, _)| *x)
+    }
+}
