@@ -1,60 +1,22 @@
-//! Will it hold? The material of the case in the case's stress unit, every static criterion's
-//! factor of safety against the required one, and the fatigue check of a cycle whose first state
-//! is the one on screen. No formula here: every number comes from `stresscase-core`.
+//! Will it hold? The judgements of the point, each in its own module with one `evaluate`:
+//! `strength` (the material and every static criterion's factor of safety against the
+//! required one) and `fatigue` (the cycle whose first state is the one on screen). This module
+//! composes them into a [`Judgement`] and finds the governing points of a section. No formula
+//! here: every number comes from `stresscase-core`.
 
-use crate::model::choices::{Cycle, Endurance, MaterialPick, Source};
-use crate::model::inputs::Num;
+mod fatigue;
+mod strength;
+
+pub use fatigue::{FatigueOutcome, NOT_A_STEEL};
+pub use strength::StaticOutcome;
+
+use crate::model::choices::{Choices, Source};
 use crate::model::source::{self, Numbers, SourceProblem};
 use stresscase_core::criteria::{self, Criterion, Verdict};
-use stresscase_core::fatigue::{self, FatigueCriterion, FatigueError, Marin};
 use stresscase_core::invariants::mean_stress;
-use stresscase_core::material::{self, Basis, MaterialError, Strengths};
+use stresscase_core::material::{Basis, Strengths};
 use stresscase_core::section::{Critical, Rank};
 use stresscase_core::{principal_values, StressTensor, StressUnit};
-
-use crate::model::choices::Choices;
-
-/// The fatigue part of a judgement, stresses in the case's unit.
-#[derive(Debug, Clone, PartialEq)]
-pub struct FatigueOutcome {
-    /// The cycle as mean and alternating tensors.
-    pub cycle: fatigue::Cycle,
-    /// von Mises alternating equivalent σa,eq.
-    pub sa: f64,
-    /// von Mises mean equivalent σm,eq, signed by I1.
-    pub sm: f64,
-    /// The endurance limit used.
-    pub se: f64,
-    /// Se′ and the Marin factors, when estimated.
-    pub estimate: Option<(f64, Marin)>,
-    /// Each criterion's factor of safety (`None`: unloaded, or the material has no Sy).
-    pub factors: Vec<(FatigueCriterion, Option<f64>)>,
-    /// The fatigue criterion whose factor is the verdict.
-    pub in_use: FatigueCriterion,
-    /// R = σmin/σmax of a proportional cycle; `None` when the second state is typed (then the
-    /// cycle at other points of a section is unknown).
-    pub ratio: Option<f64>,
-    /// A caution about the estimate (set when the material is not a steel).
-    pub caution: Option<&'static str>,
-}
-
-impl FatigueOutcome {
-    /// Whether a criterion's factor is judged (pass/fail): the one in use and the first-cycle
-    /// yield check. The others are reference figures.
-    #[must_use]
-    pub fn judged(&self, c: FatigueCriterion) -> bool {
-        c == self.in_use || c == FatigueCriterion::FirstCycleYield
-    }
-
-    /// The factor of the criterion in use (`None`: unloaded).
-    #[must_use]
-    pub fn factor_in_use(&self) -> Option<f64> {
-        self.factors
-            .iter()
-            .find(|(c, _)| *c == self.in_use)
-            .and_then(|(_, n)| *n)
-    }
-}
 
 /// Where on a section the decision is hardest: the lowest static factor under the criterion in
 /// use and, with a proportional fatigue cycle, the lowest fatigue factor. Positions as in the
@@ -93,11 +55,6 @@ impl Governing {
 
 /// Why the fatigue point is not searched for with a typed second state.
 pub const NO_FATIGUE_SEARCH: &str = "The lowest fatigue factor around the section needs a proportional cycle (R = σmin/σmax): with a typed second state, the cycle elsewhere on the section is unknown.";
-
-/// 1/n for a search (0 when unloaded), so the most severe point has the lowest factor.
-fn severity(n: Option<f64>) -> f64 {
-    n.map_or(0.0, |n| 1.0 / n)
-}
 
 /// What the case's material and stress say about the point.
 #[derive(Debug, Clone, PartialEq)]
@@ -144,25 +101,7 @@ impl Judgement {
     /// criterion: 1/n, ties to the larger mean equivalent. `None` without a proportional cycle.
     #[must_use]
     pub fn fatigue_rank(&self, t: &StressTensor) -> Option<Rank> {
-        let f = self.fatigue.as_ref()?;
-        let r = f.ratio?;
-        let s = &self.strengths;
-        let sut = s.ultimate_tensile();
-        let rank = t
-            .scaled(r)
-            .and_then(|min| fatigue::Cycle::from_extremes(t, &min))
-            .map(|cycle| {
-                let (sa, sm) = cycle.equivalents();
-                let sy = s.yield_strength().unwrap_or(sut);
-                Rank {
-                    severity: severity(fatigue::factor(f.in_use, sa, sm, f.se, sut, sy)),
-                    tie: sm,
-                }
-            });
-        Some(rank.unwrap_or(Rank {
-            severity: f64::NAN,
-            tie: 0.0,
-        }))
+        self.fatigue.as_ref()?.rank(t, &self.strengths)
     }
 }
 
@@ -211,221 +150,48 @@ pub fn governing(
     }))
 }
 
-fn problem(num: Num, message: impl Into<String>) -> SourceProblem {
-    SourceProblem {
-        num,
-        message: message.into(),
-    }
-}
-
-fn material_problem(e: MaterialError) -> SourceProblem {
-    let num = match e {
-        MaterialError::NotPositive("the ultimate tensile strength") => Num::MatSut,
-        MaterialError::NotPositive("the ultimate compressive strength")
-        | MaterialError::CompressionBelowTension => Num::MatSuc,
-        MaterialError::NotPositive("the endurance limit") => Num::Se,
-        MaterialError::Elongation => Num::MatElong,
-        _ => Num::MatSy,
-    };
-    problem(num, e.to_string())
-}
-
-const STEELS: [&str; 7] = [
-    "1020hr",
-    "1020cd",
-    "1045hr",
-    "1045cd",
-    "4140qt425",
-    "304ann",
-    "316ann",
-];
-
-/// The shown caution when Se is estimated for a material that is not a steel.
-pub const NOT_A_STEEL: &str = "Se′ = 0.5·Sut is a correlation for steels. Aluminium alloys, brass and plastics have no endurance limit: give the fatigue strength at the design life instead.";
-
-/// Judges `tensor` (in `unit`) with the case's material and settings.
+/// Judges `tensor` (in `unit`) with the case's material and settings: the static verdicts, and
+/// the fatigue check when it is on.
 ///
 /// # Errors
-/// The refused input, attached to its number.
+/// The refused input, attached to its number (the material's and the static inputs first).
 pub fn judge(
     c: &Choices,
     n: &impl Numbers,
     tensor: &StressTensor,
     unit: StressUnit,
 ) -> Result<Judgement, SourceProblem> {
-    let (name, basis, source, strengths, steel) = match c.material {
-        MaterialPick::Table(i) => {
-            let m = material::TABLE
-                .get(i)
-                .ok_or_else(|| problem(Num::MatSut, "unknown material"))?;
-            let s = m.strengths().map_err(material_problem)?;
-            (
-                m.name.to_string(),
-                Some(m.basis),
-                Some(m.source),
-                s.scaled(StressUnit::MPa.convert(1.0, unit)),
-                STEELS.contains(&m.key),
-            )
-        }
-        MaterialPick::Own => {
-            let get = |k: Num| {
-                let v = n.get(k);
-                (!(k.is_optional() && n.absent(k))).then_some(v)
-            };
-            let se = (c.fatigue && c.endurance == Endurance::Given).then(|| n.get(Num::Se));
-            let s = Strengths::try_new(
-                get(Num::MatSy),
-                n.get(Num::MatSut),
-                get(Num::MatSuc),
-                n.get(Num::MatElong),
-                se,
-            )
-            .map_err(material_problem)?;
-            (
-                "your material".to_string(),
-                None,
-                None,
-                s.scaled(c.strength_unit.convert(1.0, unit)),
-                true,
-            )
-        }
-    };
-    let required = n.get(Num::Required);
-    if !(required.is_finite() && required >= 1.0) {
-        return Err(problem(
-            Num::Required,
-            "the required factor of safety must be at least 1",
-        ));
-    }
-    let suggested = Criterion::suggested(&strengths);
-    let verdicts = criteria::verdicts(tensor, &strengths, required);
+    let s = strength::evaluate(c, n, tensor, unit)?;
     let fatigue = if c.fatigue {
-        Some(fatigue_check(c, n, tensor, unit, &strengths, steel)?)
+        Some(fatigue::evaluate(
+            c,
+            n,
+            tensor,
+            unit,
+            &s.strengths,
+            s.steel,
+        )?)
     } else {
         None
     };
     Ok(Judgement {
-        name,
-        basis,
-        source,
-        strengths,
-        suggested,
-        in_use: c.criterion.unwrap_or(suggested),
-        required,
-        verdicts,
+        name: s.name,
+        basis: s.basis,
+        source: s.source,
+        strengths: s.strengths,
+        suggested: s.suggested,
+        in_use: s.in_use,
+        required: s.required,
+        verdicts: s.verdicts,
         fatigue,
-    })
-}
-
-fn fatigue_check(
-    c: &Choices,
-    n: &impl Numbers,
-    tensor: &StressTensor,
-    unit: StressUnit,
-    s: &Strengths,
-    steel: bool,
-) -> Result<FatigueOutcome, SourceProblem> {
-    let overflow = |num| problem(num, "the cycle overflows; check the magnitudes");
-    let second = || {
-        StressTensor::new(
-            n.get(Num::second(0)),
-            n.get(Num::second(1)),
-            n.get(Num::second(2)),
-            n.get(Num::second(3)),
-            n.get(Num::second(4)),
-            n.get(Num::second(5)),
-        )
-        .map_err(|_| overflow(Num::second(0)))
-    };
-    let ratio = (c.cycle == Cycle::Ratio).then(|| n.get(Num::Ratio));
-    let cycle = match c.cycle {
-        Cycle::Ratio => {
-            let r = n.get(Num::Ratio);
-            if !(r.is_finite() && r <= 1.0) {
-                return Err(problem(
-                    Num::Ratio,
-                    "R = σmin/σmax cannot exceed 1 (the state on screen is the maximum)",
-                ));
-            }
-            let min = tensor.scaled(r).map_err(|_| overflow(Num::Ratio))?;
-            fatigue::Cycle::from_extremes(tensor, &min).map_err(|_| overflow(Num::Ratio))?
-        }
-        Cycle::Minimum => fatigue::Cycle::from_extremes(tensor, &second()?)
-            .map_err(|_| overflow(Num::second(0)))?,
-        Cycle::Alternating => fatigue::Cycle {
-            mean: *tensor,
-            alternating: second()?,
-        },
-    };
-    let (sa, sm) = cycle.equivalents();
-    let to_mpa = unit.convert(1.0, StressUnit::MPa);
-    let (se, estimate, caution) = match c.endurance {
-        Endurance::Given => {
-            let se = n.get(Num::Se) * c.strength_unit.convert(1.0, unit);
-            if !(se.is_finite() && se > 0.0) {
-                return Err(problem(
-                    Num::Se,
-                    "the endurance limit must be a positive number",
-                ));
-            }
-            (se, None, None)
-        }
-        Endurance::Estimate => {
-            let sut_mpa = s.ultimate_tensile() * to_mpa;
-            let m = fatigue::marin(
-                c.finish,
-                sut_mpa,
-                n.get(Num::FatD),
-                c.loading,
-                n.get(Num::FatTemp),
-                n.get(Num::FatRel),
-            )
-            .map_err(|e| {
-                let num = match e {
-                    FatigueError::SizeRange => Num::FatD,
-                    FatigueError::TemperatureRange => Num::FatTemp,
-                    FatigueError::Reliability => Num::FatRel,
-                    FatigueError::NotPositive(_) => Num::MatSut,
-                };
-                problem(num, e.to_string())
-            })?;
-            let se_prime = fatigue::unmodified_endurance_mpa(sut_mpa) / to_mpa;
-            (
-                m.product() * se_prime,
-                Some((se_prime, m)),
-                (!steel).then_some(NOT_A_STEEL),
-            )
-        }
-    };
-    let sut = s.ultimate_tensile();
-    let factors = FatigueCriterion::ALL
-        .iter()
-        .map(|&f| {
-            let needs_sy = !matches!(f, FatigueCriterion::Goodman | FatigueCriterion::Gerber);
-            let sy = s.yield_strength();
-            let n = match (needs_sy, sy) {
-                (true, None) => None,
-                _ => fatigue::factor(f, sa, sm, se, sut, sy.unwrap_or(sut)),
-            };
-            (f, n)
-        })
-        .collect();
-    Ok(FatigueOutcome {
-        cycle,
-        sa,
-        sm,
-        se,
-        estimate,
-        factors,
-        in_use: c.fatigue_criterion,
-        ratio,
-        caution,
     })
 }
 
 #[cfg(test)]
 mod tests {
     use super::*;
+    use crate::model::choices::MaterialPick;
+    use crate::model::inputs::Num;
     use crate::model::source::test_numbers::demo;
 
     #[test]

@@ -43,7 +43,8 @@ fn overflow(num: Num) -> SourceProblem {
     problem(num, "the result overflows; check the magnitudes")
 }
 
-fn problem(num: Num, message: impl Into<String>) -> SourceProblem {
+/// A refusal of `num`, with the reason.
+pub(crate) fn problem(num: Num, message: impl Into<String>) -> SourceProblem {
     SourceProblem {
         num,
         message: message.into(),
