@@ -3,7 +3,8 @@
 use crate::edge::browser::{self, CURRENT_KEY};
 use crate::edge::history::{HistoryAction, HistoryPolicy};
 use crate::formats::link::Case;
-use crate::model::case::{CaseForm, Evaluation};
+use crate::model::case::CaseForm;
+use crate::model::evaluation::Evaluation;
 use crate::panels::{
     calc_sheet::{SheetHead, SheetTail},
     case_shelf::CaseShelf,

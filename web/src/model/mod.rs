@@ -6,6 +6,7 @@
 pub mod case;
 pub mod choices;
 pub mod entry;
+pub mod evaluation;
 pub mod inputs;
 pub mod judge;
 pub mod numfmt;

@@ -8,8 +8,9 @@
 
 use crate::edge::browser;
 use crate::formats::link::Case;
-use crate::model::case::{CaseForm, Evaluation, Field, Mode};
+use crate::model::case::{CaseForm, Field, Mode};
 use crate::model::choices::{tokens, Cycle, Endurance, Source};
+use crate::model::evaluation::Evaluation;
 use crate::model::inputs::Num;
 use crate::model::source::Outcome;
 use crate::panels::elastic_entry::describe;

@@ -2,8 +2,9 @@
 //! used, the free thermal strain α·ΔT, and a warning when typed values differ from the chosen
 //! material's. [`ElasticNote`] repeats the values used beside the gauge and strain inputs.
 
-use crate::model::case::{CaseForm, Evaluation};
+use crate::model::case::CaseForm;
 use crate::model::choices::{tokens, MaterialPick};
+use crate::model::evaluation::Evaluation;
 use crate::model::inputs::Num;
 use crate::model::numfmt::format_for_entry;
 use crate::model::source::ElasticUsed;

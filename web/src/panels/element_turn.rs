@@ -1,8 +1,9 @@
 //! "Turn the element": the angle θ, typed or dragged, with jumps to the principal and
 //! maximum-shear faces.
 
-use crate::model::case::{CaseForm, Evaluation, Field};
+use crate::model::case::{CaseForm, Field};
 use crate::model::entry::parse_number;
+use crate::model::evaluation::Evaluation;
 use crate::panels::number_field::NumberField;
 use leptos::prelude::*;
 use stresscase_core::AngleUnit;

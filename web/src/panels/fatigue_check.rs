@@ -3,8 +3,9 @@
 //! diagram (alternating against mean) with the envelopes, the yield line, the operating point and
 //! its load line.
 
-use crate::model::case::{CaseForm, Evaluation, Field};
+use crate::model::case::{CaseForm, Field};
 use crate::model::choices::{tokens, Cycle, Endurance};
+use crate::model::evaluation::Evaluation;
 use crate::model::inputs::Num;
 use crate::model::judge::{FatigueOutcome, Judgement};
 use crate::model::numfmt::{format_for_entry, format_sig, RESULT_DIGITS};

@@ -3,7 +3,7 @@
 //! pass or fail, and the fatigue factor when fatigue is on. Each figure is an element with
 //! `data-key` and the unrounded `data-value` in the unit shown.
 
-use crate::model::case::Evaluation;
+use crate::model::evaluation::Evaluation;
 use crate::model::numfmt::format_sig;
 use crate::panels::stale_notice::StaleBadge;
 use leptos::prelude::*;

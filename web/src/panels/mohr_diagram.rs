@@ -7,7 +7,8 @@
 //! as `data-origin-x`, `data-origin-y` and `data-px-per-unit` so tests can check every circle
 //! against core.
 
-use crate::model::case::{CaseForm, Evaluation, Mode};
+use crate::model::case::{CaseForm, Mode};
+use crate::model::evaluation::Evaluation;
 use crate::model::numfmt::format_sig;
 use crate::panels::export_buttons::ExportButtons;
 use crate::panels::plot::{nice_ticks, Frame, Viewport};

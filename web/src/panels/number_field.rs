@@ -1,7 +1,8 @@
 //! One labelled number input that validates as you type and says what is wrong — both a number
 //! that does not read and a value core refuses (e.g. a bore larger than the outside).
 
-use crate::model::case::{CaseForm, Evaluation, Field, FieldProblem};
+use crate::model::case::{CaseForm, Field, FieldProblem};
+use crate::model::evaluation::Evaluation;
 use leptos::prelude::*;
 
 /// The evaluation result the page shares with its fields, so each field can show core's reason

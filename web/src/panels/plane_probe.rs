@@ -1,7 +1,8 @@
 //! "Plane by its normal": the traction on any plane, for resolving the state onto the plane that
 //! matters (a weld throat, a crack face, a bond line).
 
-use crate::model::case::{CaseForm, Evaluation, Field};
+use crate::model::case::{CaseForm, Field};
+use crate::model::evaluation::Evaluation;
 use crate::model::numfmt::format_for_entry;
 use crate::panels::number_field::NumberField;
 use leptos::prelude::*;

@@ -1,7 +1,8 @@
 //! "Results": every number core gives for the case, grouped, each with its unit. Each value cell
 //! carries `data-key` and the unrounded `data-value` (in the case's unit) for tests and copying.
 
-use crate::model::case::{Evaluation, Mode};
+use crate::model::case::Mode;
+use crate::model::evaluation::Evaluation;
 use crate::model::numfmt::{format_decimal_power, format_sig, RESULT_DIGITS};
 use crate::model::source::Outcome;
 use leptos::prelude::*;

@@ -1,8 +1,9 @@
 //! "Strain-gauge rosette": layout, gauge angles and readings, the transverse-sensitivity
 //! correction, and a sketch of the rosette as entered (angles from core's reduction).
 
-use crate::model::case::{CaseForm, Evaluation};
+use crate::model::case::CaseForm;
 use crate::model::choices::{tokens, Source, MAX_GAUGES};
+use crate::model::evaluation::Evaluation;
 use crate::model::inputs::Num;
 use crate::model::numfmt::format_sig;
 use crate::model::source::Outcome;

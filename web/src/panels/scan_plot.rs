@@ -5,8 +5,9 @@
 //! [`picture`] turns core's scan into plain drawing data (tested natively); [`ScanPlot`] draws
 //! it. The `<svg>` carries the highest values as `data-max-vm` and `data-max-s1` (case unit).
 
-use crate::model::case::{CaseForm, Evaluation, Field};
+use crate::model::case::{CaseForm, Field};
 use crate::model::choices::{SectionKind, Source};
+use crate::model::evaluation::Evaluation;
 use crate::model::inputs::Num;
 use crate::model::judge::Governing;
 use crate::model::numfmt::{format_for_entry, format_sig};

@@ -2,8 +2,9 @@
 //! factors, and the point; units for each; the cautions that go with beam formulas.
 
 use crate::formats::link::Case;
-use crate::model::case::{CaseForm, Evaluation, Field};
+use crate::model::case::{CaseForm, Field};
 use crate::model::choices::{tokens, SectionKind, Source, Surface};
+use crate::model::evaluation::Evaluation;
 use crate::model::inputs::Num;
 use crate::model::numfmt::format_for_entry;
 use crate::model::source::{self, Outcome};

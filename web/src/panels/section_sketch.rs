@@ -2,8 +2,9 @@
 //! the chosen point and the critical points of the scan marked: where φ and the faces are.
 
 use crate::formats::link::Case;
-use crate::model::case::{CaseForm, Evaluation};
+use crate::model::case::CaseForm;
 use crate::model::choices::Source;
+use crate::model::evaluation::Evaluation;
 use crate::model::source::{self, Outcome};
 use crate::model::{choices, inputs};
 use leptos::prelude::*;

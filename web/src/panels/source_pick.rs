@@ -1,7 +1,8 @@
 //! "Where the stress comes from": typed components, loads on a section, a rosette, or strains.
 
-use crate::model::case::{CaseForm, Evaluation, Field};
+use crate::model::case::{CaseForm, Field};
 use crate::model::choices::Source;
+use crate::model::evaluation::Evaluation;
 use crate::model::numfmt::format_for_entry;
 use leptos::prelude::*;
 

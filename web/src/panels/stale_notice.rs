@@ -3,7 +3,8 @@
 //! a value that cannot be honoured), that there is no result yet. It sits in a live region, so
 //! screen readers announce it when it appears. [`StaleBadge`] marks each panel heading.
 
-use crate::model::case::{CaseForm, Evaluation, FieldProblem};
+use crate::model::case::{CaseForm, FieldProblem};
+use crate::model::evaluation::Evaluation;
 use leptos::prelude::*;
 
 /// Lists the invalid fields inside a polite live region that is always in the page (a region

@@ -2,7 +2,7 @@
 //! diagram (ε along the axis, γ/2 on the other, same shear-axis choice), with each gauge's
 //! direction on the circle (filled) and its reading (open) so a residual shows as a gap.
 
-use crate::model::case::Evaluation;
+use crate::model::evaluation::Evaluation;
 use crate::model::numfmt::format_sig;
 use crate::model::source::Outcome;
 use crate::panels::export_buttons::ExportButtons;

@@ -1,8 +1,9 @@
 //! "Strains (Hooke's law)": a strain state — measured, or from another analysis — turned into
 //! stress under plane stress, plane strain or in full 3D.
 
-use crate::model::case::{CaseForm, Evaluation};
+use crate::model::case::CaseForm;
 use crate::model::choices::{tokens, Source};
+use crate::model::evaluation::Evaluation;
 use crate::model::inputs::Num;
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::elastic_entry::ElasticNote;

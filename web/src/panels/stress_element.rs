@@ -1,7 +1,8 @@
 //! "Element": the square element turned by θ with its normal and shear stresses drawn as arrows,
 //! scaled to the largest of them and pointing the way each stress acts.
 
-use crate::model::case::{Evaluation, Mode};
+use crate::model::case::Mode;
+use crate::model::evaluation::Evaluation;
 use crate::model::numfmt::format_sig;
 use crate::panels::export_buttons::ExportButtons;
 use crate::panels::stale_notice::StaleBadge;

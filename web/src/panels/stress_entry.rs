@@ -1,7 +1,8 @@
 //! "Stress at the point": mode, unit and the six components.
 
-use crate::model::case::{CaseForm, Evaluation, Field, Mode};
+use crate::model::case::{CaseForm, Field, Mode};
 use crate::model::choices::Source;
+use crate::model::evaluation::Evaluation;
 use crate::model::numfmt::{format_sig, RESULT_DIGITS};
 use crate::panels::number_field::NumberField;
 use leptos::prelude::*;

@@ -5,8 +5,9 @@
 //! [`picture`] builds the envelope plot as plain data (tested natively); the `<svg>` carries its
 //! map as `data-origin-x`, `data-origin-y` and `data-px-per-unit`.
 
-use crate::model::case::{CaseForm, Evaluation, Field, Mode};
+use crate::model::case::{CaseForm, Field, Mode};
 use crate::model::choices::{tokens, ElasticFrom, MaterialPick};
+use crate::model::evaluation::Evaluation;
 use crate::model::inputs::Num;
 use crate::model::judge::Judgement;
 use crate::model::numfmt::{format_for_entry, format_sig, RESULT_DIGITS};
