@@ -1,8 +1,9 @@
 //! Every typed number of the case, declared once. One row of the [`inputs!`] table below gives a
 //! number its name ([`Num`]), link key, element id, label, what it measures (so its unit), demo
-//! value, whether it may be left empty, and when it is used. The form, the link, the calc sheet
-//! and the tests read this table; the path that uses a number reads it in its `evaluate`. Adding a
-//! number to a path is one row here plus its use there.
+//! value, whether it may be left empty, where on the page its field is drawn, and when it is
+//! used. The form, the panels, the link, the calc sheet and the tests read this table; the path
+//! that uses a number reads it in its `evaluate`. Adding a number to a path is one row here plus
+//! its use there.
 
 use super::choices::{Choices, Cycle, Endurance, Layout, MaterialPick, Source};
 use super::choices::{Condition, SectionKind};
@@ -11,12 +12,12 @@ use stresscase_core::AngleUnit;
 use SectionKind::{Rectangle, SolidRound, ThinCylinder, ThinSphere, Tube};
 
 /// Declares [`Num`] and [`INPUTS`] from one list of rows:
-/// `Name: key, id, label, quantity, demo, needed|optional, used_when;`
+/// `Name: key, id, label, quantity, demo, needed|optional, place, used_when;`
 macro_rules! inputs {
     ($(
         $(#[doc = $doc:literal])*
         $num:ident: $key:literal, $id:literal, $label:expr, $quantity:ident, $demo:literal,
-        $need:ident, $used:expr;
+        $need:ident, $place:ident, $used:expr;
     )*) => {
         /// A typed number of the case; each is declared by its row of [`INPUTS`].
         #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, PartialOrd, Ord)]
@@ -35,6 +36,7 @@ macro_rules! inputs {
                 quantity: Quantity::$quantity,
                 demo: $demo,
                 optional: optional!($need),
+                place: Place::$place,
                 used: $used,
             },
         )*];
@@ -97,6 +99,52 @@ pub enum Label {
     SecondState(&'static str),
 }
 
+/// Where on the page a number's field is drawn: each is a group of fields in one panel, shown
+/// in table order.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Place {
+    /// Section: dimensions.
+    Dimensions,
+    /// Section: forces and moments.
+    Loads,
+    /// Section: pressures.
+    Pressures,
+    /// Section: stress concentration factors.
+    Concentration,
+    /// Section: the point on the section.
+    Point,
+    /// Rosette: the gauges' angles and readings.
+    Gauges,
+    /// Rosette: the transverse-sensitivity correction.
+    GaugeCorrection,
+    /// Strains.
+    Strains,
+    /// Elastic constants and temperature change.
+    Elastic,
+    /// Static verdict: the required factor of safety.
+    Required,
+    /// Static verdict: the user's own material.
+    OwnMaterial,
+    /// Fatigue: the stress ratio.
+    CycleRatio,
+    /// Fatigue: the cycle's second state.
+    SecondState,
+    /// Fatigue: the endurance limit, given or estimated.
+    Endurance,
+}
+
+impl Place {
+    /// Its numbers, in table order.
+    #[must_use]
+    pub fn numbers(self) -> Vec<Num> {
+        INPUTS
+            .iter()
+            .filter(|i| i.place == self)
+            .map(|i| i.num)
+            .collect()
+    }
+}
+
 /// One typed number of the case: its link key, element id, label, what it measures (so its
 /// unit), its demo value, whether it may be left empty, and when the case uses it.
 #[derive(Debug, Clone, Copy)]
@@ -116,6 +164,8 @@ pub struct Input {
     pub demo: &'static str,
     /// May be left empty (then absent from the case and its link).
     pub optional: bool,
+    /// Where on the page its field is drawn.
+    pub place: Place,
     /// Whether a case with these choices uses it.
     pub used: fn(&Choices) -> bool,
 }
@@ -125,195 +175,195 @@ use Label::{Choice, Fixed, SecondState};
 inputs! {
     // Loads on a section or vessel (source/section.rs).
     /// Diameter (solid), outer diameter (tube) or mean diameter (thin vessel).
-    D: "d", "in-d", Choice(diameter_label), Length, "40", needed,
+    D: "d", "in-d", Choice(diameter_label), Length, "40", needed, Dimensions,
         |c| on_section(c, &[SolidRound, Tube, ThinCylinder, ThinSphere]);
     /// Inner diameter of a tube.
-    Di: "di", "in-di", Fixed("inner diameter Di"), Length, "28", needed,
+    Di: "di", "in-di", Fixed("inner diameter Di"), Length, "28", needed, Dimensions,
         |c| on_section(c, &[Tube]);
     /// Rectangle depth along y.
-    H: "h", "in-h", Fixed("depth h (along y)"), Length, "60", needed,
+    H: "h", "in-h", Fixed("depth h (along y)"), Length, "60", needed, Dimensions,
         |c| on_section(c, &[Rectangle]);
     /// Rectangle width along z.
-    B: "b", "in-b", Fixed("width b (along z)"), Length, "25", needed,
+    B: "b", "in-b", Fixed("width b (along z)"), Length, "25", needed, Dimensions,
         |c| on_section(c, &[Rectangle]);
     /// Thin-vessel wall thickness.
-    Wall: "wall", "in-wall", Fixed("wall thickness t"), Length, "4", needed,
+    Wall: "wall", "in-wall", Fixed("wall thickness t"), Length, "4", needed, Dimensions,
         |c| on_section(c, &[ThinCylinder, ThinSphere]);
     /// Axial force.
-    N: "N", "in-load-n", Fixed("axial force N"), Force, "12", needed,
+    N: "N", "in-load-n", Fixed("axial force N"), Force, "12", needed, Loads,
         |c| on_section(c, LOADED);
     /// Bending moment about y.
-    My: "My", "in-load-my", Fixed("bending moment My"), Moment, "0", needed,
+    My: "My", "in-load-my", Fixed("bending moment My"), Moment, "0", needed, Loads,
         |c| on_section(c, LOADED);
     /// Bending moment about z.
-    Mz: "Mz", "in-load-mz", Fixed("bending moment Mz"), Moment, "380", needed,
+    Mz: "Mz", "in-load-mz", Fixed("bending moment Mz"), Moment, "380", needed, Loads,
         |c| on_section(c, LOADED);
     /// Torque.
-    T: "T", "in-load-t", Fixed("torque T"), Moment, "520", needed,
+    T: "T", "in-load-t", Fixed("torque T"), Moment, "520", needed, Loads,
         |c| on_section(c, LOADED);
     /// Shear force along y.
-    Vy: "Vy", "in-load-vy", Fixed("shear force Vy"), Force, "4.5", needed,
+    Vy: "Vy", "in-load-vy", Fixed("shear force Vy"), Force, "4.5", needed, Loads,
         |c| on_section(c, LOADED);
     /// Shear force along z.
-    Vz: "Vz", "in-load-vz", Fixed("shear force Vz"), Force, "0", needed,
+    Vz: "Vz", "in-load-vz", Fixed("shear force Vz"), Force, "0", needed, Loads,
         |c| on_section(c, LOADED);
     /// Internal pressure.
-    Pin: "pin", "in-pin", Choice(pressure_label), Pressure, "18", needed,
+    Pin: "pin", "in-pin", Choice(pressure_label), Pressure, "18", needed, Pressures,
         |c| on_section(c, &[Tube, ThinCylinder, ThinSphere]);
     /// External pressure.
-    Pout: "pout", "in-pout", Fixed("external pressure po"), Pressure, "0", needed,
+    Pout: "pout", "in-pout", Fixed("external pressure po"), Pressure, "0", needed, Pressures,
         |c| on_section(c, &[SolidRound, Tube]);
     /// Normal-stress concentration factor.
-    Kt: "kt", "in-kt", Fixed("Kt (normal)"), Ratio, "1", needed,
+    Kt: "kt", "in-kt", Fixed("Kt (normal)"), Ratio, "1", needed, Concentration,
         |c| on_section(c, LOADED);
     /// Shear-stress concentration factor.
-    Kts: "kts", "in-kts", Fixed("Kts (shear)"), Ratio, "1", needed,
+    Kts: "kts", "in-kts", Fixed("Kts (shear)"), Ratio, "1", needed, Concentration,
         |c| on_section(c, LOADED);
     /// Point angle φ on a round section.
-    Phi: "phi", "in-phi", Fixed("point angle φ"), Angle, "180", needed,
+    Phi: "phi", "in-phi", Fixed("point angle φ"), Angle, "180", needed, Point,
         |c| on_section(c, &[SolidRound, Tube]);
     /// Point radius on a tube.
-    R: "r", "in-r", Fixed("point radius r"), Length, "20", needed,
+    R: "r", "in-r", Fixed("point radius r"), Length, "20", needed, Point,
         |c| on_section(c, &[Tube]);
     /// Point coordinate along a rectangle face.
-    Along: "at", "in-along", Choice(along_label), Length, "0", needed,
+    Along: "at", "in-along", Choice(along_label), Length, "0", needed, Point,
         |c| on_section(c, &[Rectangle]);
     // Rosette readings (source/rosette.rs).
     /// Gauge direction 1.
-    GaugeAngle1: "a1", "in-ga1", Fixed("gauge 1 angle"), Angle, "0", needed,
+    GaugeAngle1: "a1", "in-ga1", Fixed("gauge 1 angle"), Angle, "0", needed, Gauges,
         custom_angle::<0>;
     /// Gauge reading 1.
-    GaugeReading1: "e1", "in-ge1", Fixed("gauge 1 reading"), Strain, "640", needed,
+    GaugeReading1: "e1", "in-ge1", Fixed("gauge 1 reading"), Strain, "640", needed, Gauges,
         gauge::<0>;
     /// Gauge direction 2.
-    GaugeAngle2: "a2", "in-ga2", Fixed("gauge 2 angle"), Angle, "45", needed,
+    GaugeAngle2: "a2", "in-ga2", Fixed("gauge 2 angle"), Angle, "45", needed, Gauges,
         custom_angle::<1>;
     /// Gauge reading 2.
-    GaugeReading2: "e2", "in-ge2", Fixed("gauge 2 reading"), Strain, "215", needed,
+    GaugeReading2: "e2", "in-ge2", Fixed("gauge 2 reading"), Strain, "215", needed, Gauges,
         gauge::<1>;
     /// Gauge direction 3.
-    GaugeAngle3: "a3", "in-ga3", Fixed("gauge 3 angle"), Angle, "90", needed,
+    GaugeAngle3: "a3", "in-ga3", Fixed("gauge 3 angle"), Angle, "90", needed, Gauges,
         custom_angle::<2>;
     /// Gauge reading 3.
-    GaugeReading3: "e3", "in-ge3", Fixed("gauge 3 reading"), Strain, "-180", needed,
+    GaugeReading3: "e3", "in-ge3", Fixed("gauge 3 reading"), Strain, "-180", needed, Gauges,
         gauge::<2>;
     /// Gauge direction 4.
-    GaugeAngle4: "a4", "in-ga4", Fixed("gauge 4 angle"), Angle, "135", needed,
+    GaugeAngle4: "a4", "in-ga4", Fixed("gauge 4 angle"), Angle, "135", needed, Gauges,
         custom_angle::<3>;
     /// Gauge reading 4.
-    GaugeReading4: "e4", "in-ge4", Fixed("gauge 4 reading"), Strain, "250", needed,
+    GaugeReading4: "e4", "in-ge4", Fixed("gauge 4 reading"), Strain, "250", needed, Gauges,
         gauge::<3>;
     /// Gauge direction 5.
-    GaugeAngle5: "a5", "in-ga5", Fixed("gauge 5 angle"), Angle, "30", needed,
+    GaugeAngle5: "a5", "in-ga5", Fixed("gauge 5 angle"), Angle, "30", needed, Gauges,
         custom_angle::<4>;
     /// Gauge reading 5.
-    GaugeReading5: "e5", "in-ge5", Fixed("gauge 5 reading"), Strain, "420", needed,
+    GaugeReading5: "e5", "in-ge5", Fixed("gauge 5 reading"), Strain, "420", needed, Gauges,
         gauge::<4>;
     /// Gauge direction 6.
-    GaugeAngle6: "a6", "in-ga6", Fixed("gauge 6 angle"), Angle, "60", needed,
+    GaugeAngle6: "a6", "in-ga6", Fixed("gauge 6 angle"), Angle, "60", needed, Gauges,
         custom_angle::<5>;
     /// Gauge reading 6.
-    GaugeReading6: "e6", "in-ge6", Fixed("gauge 6 reading"), Strain, "310", needed,
+    GaugeReading6: "e6", "in-ge6", Fixed("gauge 6 reading"), Strain, "310", needed, Gauges,
         gauge::<5>;
     /// Gauge direction 7.
-    GaugeAngle7: "a7", "in-ga7", Fixed("gauge 7 angle"), Angle, "120", needed,
+    GaugeAngle7: "a7", "in-ga7", Fixed("gauge 7 angle"), Angle, "120", needed, Gauges,
         custom_angle::<6>;
     /// Gauge reading 7.
-    GaugeReading7: "e7", "in-ge7", Fixed("gauge 7 reading"), Strain, "-90", needed,
+    GaugeReading7: "e7", "in-ge7", Fixed("gauge 7 reading"), Strain, "-90", needed, Gauges,
         gauge::<6>;
     /// Gauge direction 8.
-    GaugeAngle8: "a8", "in-ga8", Fixed("gauge 8 angle"), Angle, "150", needed,
+    GaugeAngle8: "a8", "in-ga8", Fixed("gauge 8 angle"), Angle, "150", needed, Gauges,
         custom_angle::<7>;
     /// Gauge reading 8.
-    GaugeReading8: "e8", "in-ge8", Fixed("gauge 8 reading"), Strain, "120", needed,
+    GaugeReading8: "e8", "in-ge8", Fixed("gauge 8 reading"), Strain, "120", needed, Gauges,
         gauge::<7>;
     /// Transverse-sensitivity coefficient Kt of the gauges, in percent.
-    GaugeKt: "gkt", "in-gkt", Fixed("transverse sensitivity Kt"), Percent, "1.2", needed,
+    GaugeKt: "gkt", "in-gkt", Fixed("transverse sensitivity Kt"), Percent, "1.2", needed, GaugeCorrection,
         |c| c.source == Source::Rosette && c.correct;
     /// Poisson's ratio of the gauge-factor calibration beam.
-    GaugeNu0: "gnu0", "in-gnu0", Fixed("ν0 of the calibration beam"), Ratio, "0.285", needed,
+    GaugeNu0: "gnu0", "in-gnu0", Fixed("ν0 of the calibration beam"), Ratio, "0.285", needed, GaugeCorrection,
         |c| c.source == Source::Rosette && c.correct;
     // Strains through Hooke's law (source/strain.rs).
     /// εx.
-    Ex: "ex", "in-ex", Fixed("εx"), Strain, "520", needed,
+    Ex: "ex", "in-ex", Fixed("εx"), Strain, "520", needed, Strains,
         |c| c.source == Source::Strain;
     /// εy.
-    Ey: "ey", "in-ey", Fixed("εy"), Strain, "-160", needed,
+    Ey: "ey", "in-ey", Fixed("εy"), Strain, "-160", needed, Strains,
         |c| c.source == Source::Strain;
     /// εz.
-    Ez: "ez", "in-ez", Fixed("εz"), Strain, "0", needed,
+    Ez: "ez", "in-ez", Fixed("εz"), Strain, "0", needed, Strains,
         strain_3d;
     /// γxy.
-    Gxy: "gxy", "in-gxy", Fixed("γxy"), Strain, "300", needed,
+    Gxy: "gxy", "in-gxy", Fixed("γxy"), Strain, "300", needed, Strains,
         |c| c.source == Source::Strain;
     /// γyz.
-    Gyz: "gyz", "in-gyz", Fixed("γyz"), Strain, "0", needed,
+    Gyz: "gyz", "in-gyz", Fixed("γyz"), Strain, "0", needed, Strains,
         strain_3d;
     /// γzx.
-    Gzx: "gzx", "in-gzx", Fixed("γzx"), Strain, "0", needed,
+    Gzx: "gzx", "in-gzx", Fixed("γzx"), Strain, "0", needed, Strains,
         strain_3d;
     // Elastic constants, shared by the rosette and strain paths and the strain state (source.rs).
     /// Young's modulus.
-    E: "E", "in-e", Fixed("Young's modulus E"), Modulus, "200", needed,
+    E: "E", "in-e", Fixed("Young's modulus E"), Modulus, "200", needed, Elastic,
         Choices::elastic_typed;
     /// Poisson's ratio.
-    Nu: "nu", "in-nu", Fixed("Poisson's ratio ν"), Ratio, "0.3", needed,
+    Nu: "nu", "in-nu", Fixed("Poisson's ratio ν"), Ratio, "0.3", needed, Elastic,
         Choices::elastic_typed;
     /// Coefficient of thermal expansion, µε/K.
-    Alpha: "alpha", "in-alpha", Fixed("expansion coefficient α"), Expansion, "12", needed,
+    Alpha: "alpha", "in-alpha", Fixed("expansion coefficient α"), Expansion, "12", needed, Elastic,
         Choices::elastic_typed;
     /// Temperature change, K.
-    DeltaT: "dT", "in-dt", Fixed("temperature change ΔT"), Temperature, "0", needed,
+    DeltaT: "dT", "in-dt", Fixed("temperature change ΔT"), Temperature, "0", needed, Elastic,
         |_| true;
     // The static verdict and its material (judge/verdict.rs).
     /// Required factor of safety.
-    Required: "nreq", "in-nreq", Fixed("required factor of safety"), Ratio, "2", needed,
+    Required: "nreq", "in-nreq", Fixed("required factor of safety"), Ratio, "2", needed, Required,
         |_| true;
     /// Own material: tensile yield strength Sy (optional for brittle materials).
-    MatSy: "msy", "in-msy", Fixed("yield strength Sy (empty if none)"), Strength, "250", optional,
+    MatSy: "msy", "in-msy", Fixed("yield strength Sy (empty if none)"), Strength, "250", optional, OwnMaterial,
         own_material;
     /// Own material: ultimate tensile strength Sut.
-    MatSut: "msut", "in-msut", Fixed("ultimate tensile Sut"), Strength, "420", needed,
+    MatSut: "msut", "in-msut", Fixed("ultimate tensile Sut"), Strength, "420", needed, OwnMaterial,
         own_material;
     /// Own material: ultimate compressive strength Suc (optional).
-    MatSuc: "msuc", "in-msuc", Fixed("ultimate compressive Suc (optional)"), Strength, "", optional,
+    MatSuc: "msuc", "in-msuc", Fixed("ultimate compressive Suc (optional)"), Strength, "", optional, OwnMaterial,
         own_material;
     /// Own material: elongation at fracture, percent.
-    MatElong: "melong", "in-melong", Fixed("elongation at fracture"), Percent, "22", needed,
+    MatElong: "melong", "in-melong", Fixed("elongation at fracture"), Percent, "22", needed, OwnMaterial,
         own_material;
     // The fatigue check (judge/fatigue.rs).
     /// Stress ratio R = σmin/σmax of a proportional cycle.
-    Ratio: "R", "in-ratio", Fixed("stress ratio R = σmin/σmax"), Ratio, "-1", needed,
+    Ratio: "R", "in-ratio", Fixed("stress ratio R = σmin/σmax"), Ratio, "-1", needed, CycleRatio,
         |c| c.fatigue && c.cycle == Cycle::Ratio;
     /// The cycle's second state (minimum or alternating): σx.
-    SecondX: "s2x", "in-s2x", SecondState("σx"), CaseStress, "", needed,
+    SecondX: "s2x", "in-s2x", SecondState("σx"), CaseStress, "", needed, SecondState,
         second_state;
     /// The cycle's second state (minimum or alternating): σy.
-    SecondY: "s2y", "in-s2y", SecondState("σy"), CaseStress, "", needed,
+    SecondY: "s2y", "in-s2y", SecondState("σy"), CaseStress, "", needed, SecondState,
         second_state;
     /// The cycle's second state (minimum or alternating): σz.
-    SecondZ: "s2z", "in-s2z", SecondState("σz"), CaseStress, "", needed,
+    SecondZ: "s2z", "in-s2z", SecondState("σz"), CaseStress, "", needed, SecondState,
         second_state;
     /// The cycle's second state (minimum or alternating): τxy.
-    SecondXy: "s2xy", "in-s2xy", SecondState("τxy"), CaseStress, "", needed,
+    SecondXy: "s2xy", "in-s2xy", SecondState("τxy"), CaseStress, "", needed, SecondState,
         second_state;
     /// The cycle's second state (minimum or alternating): τyz.
-    SecondYz: "s2yz", "in-s2yz", SecondState("τyz"), CaseStress, "", needed,
+    SecondYz: "s2yz", "in-s2yz", SecondState("τyz"), CaseStress, "", needed, SecondState,
         second_state;
     /// The cycle's second state (minimum or alternating): τzx.
-    SecondZx: "s2zx", "in-s2zx", SecondState("τzx"), CaseStress, "", needed,
+    SecondZx: "s2zx", "in-s2zx", SecondState("τzx"), CaseStress, "", needed, SecondState,
         second_state;
     /// Endurance limit Se, given.
-    Se: "se", "in-se", Fixed("endurance limit Se (corrected)"), Strength, "160", needed,
+    Se: "se", "in-se", Fixed("endurance limit Se (corrected)"), Strength, "160", needed, Endurance,
         |c| c.fatigue && c.endurance == Endurance::Given;
     /// Diameter for the size factor, mm.
-    FatD: "fd", "in-fd", Fixed("diameter for the size factor"), Millimetre, "40", needed,
+    FatD: "fd", "in-fd", Fixed("diameter for the size factor"), Millimetre, "40", needed, Endurance,
         estimated_endurance;
     /// Operating temperature, °C.
-    FatTemp: "ftemp", "in-ftemp", Fixed("operating temperature"), Celsius, "20", needed,
+    FatTemp: "ftemp", "in-ftemp", Fixed("operating temperature"), Celsius, "20", needed, Endurance,
         estimated_endurance;
     /// Reliability, percent.
-    FatRel: "frel", "in-frel", Fixed("reliability"), Percent, "90", needed,
+    FatRel: "frel", "in-frel", Fixed("reliability"), Percent, "90", needed, Endurance,
         estimated_endurance;
 }
 

@@ -5,7 +5,7 @@
 use crate::model::case::CaseForm;
 use crate::model::choices::{tokens, MaterialPick};
 use crate::model::evaluation::Evaluation;
-use crate::model::inputs::Num;
+use crate::model::inputs::Place;
 use crate::model::numfmt::format_for_entry;
 use crate::model::source::ElasticUsed;
 use crate::panels::choice_select::ChoiceSelect;
@@ -76,7 +76,7 @@ pub fn ElasticEntry(
                     get=|f| f.choices.modulus_unit.symbol()
                     set=|f, v| if let Some(u) = StressUnit::from_symbol(v) { f.change_modulus_unit(u); }/>
             </div>
-            <SourceFields form=form nums=vec![Num::E, Num::Nu, Num::Alpha, Num::DeltaT]/>
+            <SourceFields form=form place=Place::Elastic/>
             <ElasticNote shown=shown stale=stale id="elastic-source"/>
             <p class="hint">"They turn gauge readings and strains into stress, and every stress into the strain state shown with the results. Your own material has no elastic constants: type them. E > 0 and −1 < ν < 0.5."</p>
         </fieldset>

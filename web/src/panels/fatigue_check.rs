@@ -6,7 +6,7 @@
 use crate::model::case::{CaseForm, Field};
 use crate::model::choices::{tokens, Cycle, Endurance};
 use crate::model::evaluation::Evaluation;
-use crate::model::inputs::Num;
+use crate::model::inputs::{Num, Place};
 use crate::model::judge::{FatigueOutcome, Judgement};
 use crate::model::numfmt::{format_for_entry, format_sig, RESULT_DIGITS};
 use crate::panels::choice_select::ChoiceSelect;
@@ -253,9 +253,9 @@ pub fn FatigueCheck(
                         options=vec![("ratio", "the state on screen is the maximum; minimum = R × maximum"), ("min", "the state on screen is the maximum; the minimum below"), ("alt", "the state on screen is the mean; the alternating amplitude below")]
                         get=|f| tokens::token(&tokens::CYCLE, f.choices.cycle)
                         set=|f, v| if let Some(c) = tokens::value(&tokens::CYCLE, v) { f.set_cycle(c); }/>
-                    <SourceFields form=form nums=vec![Num::Ratio]/>
+                    <SourceFields form=form place=Place::CycleRatio/>
                     <div hidden=move || form.with(|f| f.choices.cycle == Cycle::Ratio)>
-                        <SourceFields form=form nums=(0..6).map(Num::second).collect()/>
+                        <SourceFields form=form place=Place::SecondState/>
                         <div class="buttons">
                             <button type="button" id="take-second" on:click=move |_| shown.with_untracked(|e| if let Some(e) = e { form.update(|f| take_second(f, e)); })>"Take the state on screen"</button>
                         </div>
@@ -281,7 +281,7 @@ pub fn FatigueCheck(
                             get=|f| f.choices.strength_unit.symbol()
                             set=|f, v| if let Some(u) = StressUnit::from_symbol(v) { f.change_strength_unit(u); }/>
                     </div>
-                    <SourceFields form=form nums=vec![Num::Se, Num::FatD, Num::FatTemp, Num::FatRel]/>
+                    <SourceFields form=form place=Place::Endurance/>
                     <ChoiceSelect form=form id="fatigue-criterion" label="Fatigue criterion in use"
                         options=vec![("goodman", "modified Goodman"), ("gerber", "Gerber"), ("asme", "ASME-elliptic"), ("soderberg", "Soderberg")]
                         get=|f| tokens::token(&tokens::FATIGUE_CRITERION, f.choices.fatigue_criterion)

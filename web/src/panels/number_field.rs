@@ -49,13 +49,11 @@ pub fn NumberField(form: RwSignal<CaseForm>, field: Field) -> impl IntoView {
     }
 }
 
-/// The fields among `nums` that the case's current path uses, re-drawn only when that set
-/// changes (so typing never rebuilds an input under the cursor).
+/// The fields drawn at `place` that the case's current choices use, re-drawn only when that
+/// set changes (so typing never rebuilds an input under the cursor).
 #[component]
-pub fn SourceFields(
-    form: RwSignal<CaseForm>,
-    nums: Vec<crate::model::inputs::Num>,
-) -> impl IntoView {
+pub fn SourceFields(form: RwSignal<CaseForm>, place: crate::model::inputs::Place) -> impl IntoView {
+    let nums = place.numbers();
     let shown = Memo::new(move |_| {
         let active = form.with(|f| f.choices.active());
         nums.iter()

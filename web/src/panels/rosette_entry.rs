@@ -4,7 +4,7 @@
 use crate::model::case::CaseForm;
 use crate::model::choices::{tokens, Source, MAX_GAUGES};
 use crate::model::evaluation::Evaluation;
-use crate::model::inputs::Num;
+use crate::model::inputs::Place;
 use crate::model::numfmt::format_sig;
 use crate::model::source::Outcome;
 use crate::panels::choice_select::ChoiceSelect;
@@ -76,14 +76,8 @@ pub fn RosetteEntry(
             _ => vec![],
         })
     });
-    let mut gauge_nums = Vec::new();
-    for i in 0..MAX_GAUGES {
-        gauge_nums.push(Num::gauge_angle(i));
-        gauge_nums.push(Num::gauge_reading(i));
-    }
     move || {
         on.get().then(|| {
-            let gauge_nums = gauge_nums.clone();
             view! {
                 <fieldset class="panel" id="panel-rosette">
                     <legend><h2 class="panel-title">"Strain-gauge rosette"</h2></legend>
@@ -101,14 +95,14 @@ pub fn RosetteEntry(
                         options=vec![("ue", "µε (microstrain)"), ("strain", "strain (m/m)")]
                         get=|f| f.choices.strain_unit.token()
                         set=|f, v| if let Some(u) = StrainUnit::from_token(v) { f.change_strain_unit(u); }/>
-                    <SourceFields form=form nums=gauge_nums/>
+                    <SourceFields form=form place=Place::Gauges/>
                     <label class="check">
                         <input type="checkbox" id="transverse-on"
                             prop:checked=move || correct.get()
                             on:change:target=move |ev| form.update(|f| f.choices.correct = ev.target().checked())/>
                         " correct for transverse sensitivity"
                     </label>
-                    <SourceFields form=form nums=vec![Num::GaugeKt, Num::GaugeNu0]/>
+                    <SourceFields form=form place=Place::GaugeCorrection/>
                     <svg class="rosette-sketch" id="rosette-svg" viewBox="0 0 200 200" role="img" aria-label="the rosette as entered">
                         <line class="axis" x1="14" y1="100" x2="188" y2="100"/>
                         <polygon class="arrow" points="188,100 180,96 180,104"/>

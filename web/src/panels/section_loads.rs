@@ -5,7 +5,7 @@ use crate::formats::link::Case;
 use crate::model::case::{CaseForm, Field};
 use crate::model::choices::{tokens, SectionKind, Source, Surface};
 use crate::model::evaluation::Evaluation;
-use crate::model::inputs::Num;
+use crate::model::inputs::{Num, Place};
 use crate::model::numfmt::format_for_entry;
 use crate::model::source::{self, Outcome};
 use crate::panels::choice_select::ChoiceSelect;
@@ -97,14 +97,14 @@ pub fn SectionLoads(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                         })}
                     </div>
                     <h3>"Size"</h3>
-                    <SourceFields form=form nums=vec![Num::D, Num::Di, Num::H, Num::B, Num::Wall]/>
+                    <SourceFields form=form place=Place::Dimensions/>
                     {(!thin).then(|| view! {
                         <h3>"Loads on the +x face"</h3>
-                        <SourceFields form=form nums=vec![Num::N, Num::My, Num::Mz, Num::T, Num::Vy, Num::Vz]/>
+                        <SourceFields form=form place=Place::Loads/>
                     })}
                     {(k != SectionKind::Rectangle).then(|| view! {
                         <h3>"Pressure"</h3>
-                        <SourceFields form=form nums=vec![Num::Pin, Num::Pout]/>
+                        <SourceFields form=form place=Place::Pressures/>
                     })}
                     {(k != SectionKind::ThinSphere && k != SectionKind::Rectangle).then(|| view! {
                         <ChoiceSelect form=form id="ends" label="Ends"
@@ -120,7 +120,7 @@ pub fn SectionLoads(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                     })}
                     {(!thin).then(|| view! {
                         <h3>"Stress concentration at the point"</h3>
-                        <SourceFields form=form nums=vec![Num::Kt, Num::Kts]/>
+                        <SourceFields form=form place=Place::Concentration/>
                         <p class="hint">"Kt multiplies σx from N, My, Mz; Kts the shear from T, Vy, Vz. Pressure stresses are not multiplied. Use 1 away from notches."</p>
                     })}
                     <h3>"The point"</h3>
@@ -136,7 +136,7 @@ pub fn SectionLoads(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                             get=|f| tokens::token(&tokens::SURFACE, f.choices.surface)
                             set=|f, v| f.choices.surface = if v == "outer" { Surface::Outer } else { Surface::Inner }/>
                     })}
-                    <SourceFields form=form nums=vec![Num::Phi, Num::R, Num::Along]/>
+                    <SourceFields form=form place=Place::Point/>
                     {(!thin).then(|| view! { <SectionSketch form=form shown=shown/> })}
                     {(k == SectionKind::Tube).then(|| view! {
                         <div class="buttons">

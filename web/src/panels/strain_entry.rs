@@ -4,7 +4,7 @@
 use crate::model::case::CaseForm;
 use crate::model::choices::{tokens, Source};
 use crate::model::evaluation::Evaluation;
-use crate::model::inputs::Num;
+use crate::model::inputs::Place;
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::elastic_entry::ElasticNote;
 use crate::panels::number_field::SourceFields;
@@ -31,7 +31,7 @@ pub fn StrainEntry(
                     options=vec![("ue", "µε (microstrain)"), ("strain", "strain (m/m)")]
                     get=|f| f.choices.strain_unit.token()
                     set=|f, v| if let Some(u) = StrainUnit::from_token(v) { f.change_strain_unit(u); }/>
-                <SourceFields form=form nums=vec![Num::Ex, Num::Ey, Num::Ez, Num::Gxy, Num::Gyz, Num::Gzx]/>
+                <SourceFields form=form place=Place::Strains/>
                 <ElasticNote shown=shown stale=stale id="elastic-used"/>
                 <p class="hint">"Shear strains are engineering shear strains γ = 2ε (γ = τ/G). Total strains: the free thermal strain α·ΔT below is taken off before Hooke's law."</p>
             </fieldset>

@@ -8,7 +8,7 @@
 use crate::model::case::{CaseForm, Field, Mode};
 use crate::model::choices::{tokens, ElasticFrom, MaterialPick};
 use crate::model::evaluation::Evaluation;
-use crate::model::inputs::Num;
+use crate::model::inputs::{Num, Place};
 use crate::model::judge::Judgement;
 use crate::model::numfmt::{format_for_entry, format_sig, RESULT_DIGITS};
 use crate::panels::choice_select::ChoiceSelect;
@@ -327,9 +327,9 @@ pub fn Verdict(
                             options=StressUnit::ALL.iter().map(|u| (u.symbol(), u.symbol())).collect()
                             get=|f| f.choices.strength_unit.symbol()
                             set=|f, v| if let Some(u) = StressUnit::from_symbol(v) { f.change_strength_unit(u); }/>
-                        <SourceFields form=form nums=vec![Num::MatSy, Num::MatSut, Num::MatSuc, Num::MatElong]/>
+                        <SourceFields form=form place=Place::OwnMaterial/>
                     </div>
-                    <SourceFields form=form nums=vec![Num::Required]/>
+                    <SourceFields form=form place=Place::Required/>
                     <ChoiceSelect form=form id="criterion" label="Criterion in use"
                         options=vec![("auto", "as the material suggests (ductile: von Mises; brittle: modified Mohr)"), ("vm", "von Mises"), ("tresca", "Tresca"), ("normal", "maximum normal stress"), ("cm", "Coulomb–Mohr"), ("mm", "modified Mohr")]
                         get=|f| tokens::token(&tokens::CRITERION, f.choices.criterion)
