@@ -8,7 +8,6 @@ mod fatigue;
 mod strength;
 
 pub use fatigue::{FatigueOutcome, NOT_A_STEEL};
-pub use strength::StaticOutcome;
 
 use crate::model::choices::{Choices, Source};
 use crate::model::source::{self, Numbers, SourceProblem};
@@ -161,30 +160,11 @@ pub fn judge(
     tensor: &StressTensor,
     unit: StressUnit,
 ) -> Result<Judgement, SourceProblem> {
-    let s = strength::evaluate(c, n, tensor, unit)?;
-    let fatigue = if c.fatigue {
-        Some(fatigue::evaluate(
-            c,
-            n,
-            tensor,
-            unit,
-            &s.strengths,
-            s.steel,
-        )?)
-    } else {
-        None
-    };
-    Ok(Judgement {
-        name: s.name,
-        basis: s.basis,
-        source: s.source,
-        strengths: s.strengths,
-        suggested: s.suggested,
-        in_use: s.in_use,
-        required: s.required,
-        verdicts: s.verdicts,
-        fatigue,
-    })
+    let mut j = strength::evaluate(c, n, tensor, unit)?;
+    if c.fatigue {
+        j.fatigue = Some(fatigue::evaluate(c, n, tensor, unit, &j.strengths)?);
+    }
+    Ok(j)
 }
 
 #[cfg(test)]

@@ -3,6 +3,7 @@
 //! fatigue criterion's factor of safety. No formula here: every number comes from
 //! `stresscase-core`.
 
+use super::strength::is_steel;
 use crate::model::choices::{Choices, Cycle, Endurance};
 use crate::model::inputs::Num;
 use crate::model::source::{problem, Numbers, SourceProblem};
@@ -96,7 +97,6 @@ pub fn evaluate(
     tensor: &StressTensor,
     unit: StressUnit,
     s: &Strengths,
-    steel: bool,
 ) -> Result<FatigueOutcome, SourceProblem> {
     let overflow = |num| problem(num, "the cycle overflows; check the magnitudes");
     let second = || {
@@ -166,7 +166,7 @@ pub fn evaluate(
             (
                 m.product() * se_prime,
                 Some((se_prime, m)),
-                (!steel).then_some(NOT_A_STEEL),
+                (!is_steel(c)).then_some(NOT_A_STEEL),
             )
         }
     };

@@ -2,35 +2,13 @@
 //! case's stress unit, and every applicable static criterion's factor of safety against the
 //! required one. No formula here: every number comes from `stresscase-core`.
 
+use super::Judgement;
 use crate::model::choices::{Choices, Endurance, MaterialPick};
 use crate::model::inputs::Num;
 use crate::model::source::{problem, Numbers, SourceProblem};
-use stresscase_core::criteria::{self, Criterion, Verdict};
-use stresscase_core::material::{self, Basis, MaterialError, Strengths};
+use stresscase_core::criteria::{self, Criterion};
+use stresscase_core::material::{self, MaterialError, Strengths};
 use stresscase_core::{StressTensor, StressUnit};
-
-/// The material and the static verdicts, stresses in the case's unit.
-#[derive(Debug, Clone, PartialEq)]
-pub struct StaticOutcome {
-    /// Material name.
-    pub name: String,
-    /// Typical or minimum (built-in rows only).
-    pub basis: Option<Basis>,
-    /// Source of the built-in row.
-    pub source: Option<&'static str>,
-    /// Strengths in the case's unit.
-    pub strengths: Strengths,
-    /// Whether Se′ = 0.5·Sut applies (a steel, or the user's own material).
-    pub steel: bool,
-    /// The criterion the material's ductility suggests.
-    pub suggested: Criterion,
-    /// The criterion in use (the user's choice, else the suggested one).
-    pub in_use: Criterion,
-    /// The required factor of safety.
-    pub required: f64,
-    /// Every applicable criterion.
-    pub verdicts: Vec<Verdict>,
-}
 
 fn material_problem(e: MaterialError) -> SourceProblem {
     let num = match e {
@@ -54,8 +32,20 @@ const STEELS: [&str; 7] = [
     "316ann",
 ];
 
+/// Whether Se′ = 0.5·Sut applies to the case's material: a built-in steel, or the user's own
+/// material (the user answers for it).
+#[must_use]
+pub fn is_steel(c: &Choices) -> bool {
+    match c.material {
+        MaterialPick::Table(i) => material::TABLE
+            .get(i)
+            .is_some_and(|m| STEELS.contains(&m.key)),
+        MaterialPick::Own => true,
+    }
+}
+
 /// The case's material in `unit`, and every static criterion's verdict on `tensor` (in `unit`)
-/// against the required factor of safety.
+/// against the required factor of safety: a [`Judgement`] without its fatigue part.
 ///
 /// # Errors
 /// The refused input, attached to its number.
@@ -64,8 +54,8 @@ pub fn evaluate(
     n: &impl Numbers,
     tensor: &StressTensor,
     unit: StressUnit,
-) -> Result<StaticOutcome, SourceProblem> {
-    let (name, basis, source, strengths, steel) = match c.material {
+) -> Result<Judgement, SourceProblem> {
+    let (name, basis, source, strengths) = match c.material {
         MaterialPick::Table(i) => {
             let m = material::TABLE
                 .get(i)
@@ -76,7 +66,6 @@ pub fn evaluate(
                 Some(m.basis),
                 Some(m.source),
                 s.scaled(StressUnit::MPa.convert(1.0, unit)),
-                STEELS.contains(&m.key),
             )
         }
         MaterialPick::Own => {
@@ -98,7 +87,6 @@ pub fn evaluate(
                 None,
                 None,
                 s.scaled(c.strength_unit.convert(1.0, unit)),
-                true,
             )
         }
     };
@@ -111,15 +99,15 @@ pub fn evaluate(
     }
     let suggested = Criterion::suggested(&strengths);
     let verdicts = criteria::verdicts(tensor, &strengths, required);
-    Ok(StaticOutcome {
+    Ok(Judgement {
         name,
         basis,
         source,
         strengths,
-        steel,
         suggested,
         in_use: c.criterion.unwrap_or(suggested),
         required,
         verdicts,
+        fatigue: None,
     })
 }
