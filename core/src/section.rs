@@ -23,9 +23,11 @@
 //!   zero at the corners
 //! - transverse shear (Jourawski): the average over the chord through the point,
 //!   τ = V·Q/(I·t), Q the first moment of the area beyond the chord and t its width. On a
-//!   rectangle it is exact in direction (along the face). On a round section the stress at the
-//!   chord's end is taken tangent to the perimeter with that average as its component along V
-//!   (the usual approximate theory), so the free surface stays free of shear
+//!   rectangle it is exact in direction (along the face). On a solid round section the stress
+//!   at the chord's end is taken tangent to the perimeter with that average as its component
+//!   along V (the usual approximate theory), so the free surface stays free of shear. In a tube
+//!   the cut is radial: τxθ = V·(ro³ − ri³)·sin φ / (3·I·(ro − ri)), the average through the wall
+//!   (thin-wall shear flow; 2V/A on a thin tube's neutral axis), finite on the bore too
 //! - pressure (round sections only): Lamé's σr and σθ through the wall ([`crate::vessel::lame`];
 //!   a solid shaft under external pressure p has σr = σθ = −p), and the end-load σx = A for
 //!   closed ends. Kt and Kts are not applied to pressure stresses.
@@ -367,6 +369,46 @@ mod tests {
             )
             .unwrap();
         assert!((side.txy().abs() - 1.5 * 1000.0 / 1200.0).abs() < 1e-12);
+    }
+
+    #[test]
+    fn a_thick_tube_carries_finite_shear_on_its_bore() {
+        // 60/40 tube, Vy = 4.5 kN. On the neutral axis the Jourawski average over the two wall
+        // cuts is V·Q/(I·t) with Q = ⅔(ro³ − ri³) (the half annulus) and t = 2(ro − ri)
+        // (standard section formulas, from memory); it is the same on the bore and outside.
+        let t = Round::tube(60.0, 40.0).unwrap();
+        let sec = Section::Round(t);
+        let v = Loads {
+            vy: 4500.0,
+            ..Loads::default()
+        };
+        let k = Concentration::default();
+        let i = t.properties().iz;
+        let q = 2.0 / 3.0 * (30f64.powi(3) - 20f64.powi(3));
+        let na = 4500.0 * q / (i * 2.0 * 10.0);
+        let at = |phi: f64, r: f64| {
+            sec.stress_at(&v, &Pressure::NONE, k, Location::Round { phi, r })
+                .unwrap()
+                .txy()
+        };
+        for r in [20.0, 25.0, 30.0] {
+            assert!((at(PI / 2.0, r).abs() - na).abs() < 1e-9 * na, "r = {r}");
+        }
+        // Where the bore's tangent turns across V (φ → 0, π) the shear goes to zero, never up:
+        // every point of the wall stays within the neutral-axis value.
+        for step in 0..=20_000 {
+            let phi = f64::from(step) * 2.0 * PI / 20_000.0;
+            for phi in [phi, PI - 1e-12, PI + 1e-9, 1e-12] {
+                for r in [20.0, 20.0 + 1e-9, 24.0] {
+                    let tau = at(phi, r);
+                    assert!(
+                        tau.is_finite() && tau.abs() <= na * (1.0 + 1e-12),
+                        "φ = {phi}, r = {r}: {tau}"
+                    );
+                }
+            }
+        }
+        assert!(at(PI - 1e-12, 20.0).abs() < 1e-9 * na);
     }
 
     #[test]

@@ -374,6 +374,9 @@ impl Chromium {
     pub fn set_offline(&mut self, offline: bool) -> Result<()> {
         let conditions = json!({ "offline": offline, "latency": 0, "downloadThroughput": -1, "uploadThroughput": -1 });
         self.call("Network.emulateNetworkConditions", conditions.clone())?;
+        // Since Chromium 138 the call above cuts requests but leaves `navigator.onLine` alone;
+        // this sets it (older builds lack the method and set it above).
+        let _ = self.call("Network.overrideNetworkState", conditions.clone());
         let targets = self.browser_call("Target.getTargets", json!({}))?;
         let workers: Vec<String> = targets["targetInfos"]
             .as_array()

@@ -1,7 +1,8 @@
 //! A solid round section or a tube: properties, the stress tensor at a point of its perimeter or
-//! wall (beam stresses, Saint-Venant torsion τ = T·r/J, Jourawski transverse shear tangent to
-//! the perimeter, Lamé pressure with closed, open or plane-strain ends), in point axes. Formulas
-//! and sources in the parent module's docs.
+//! wall (beam stresses, Saint-Venant torsion τ = T·r/J, transverse shear tangent to the
+//! perimeter — Jourawski on a solid shaft, the radial-cut average in a tube — and Lamé
+//! pressure with closed, open or plane-strain ends), in point axes. Formulas and sources in the
+//! parent module's docs.
 
 use super::{positive, Concentration, Loads, Pressure, Properties, SectionError};
 use crate::fmath;
@@ -79,20 +80,43 @@ impl Round {
         }
     }
 
-    /// Q(u)/t(u) for the chord at distance |u| from the neutral axis:
-    /// Q = ⅔[(ro² − u²)^{3/2} − (ri² − u²)₊^{3/2}], t = 2[√(ro² − u²) − √(ri² − u²)₊].
-    fn q_over_t(&self, u: f64) -> f64 {
-        let u2 = u * u;
-        let o = (self.ro * self.ro - u2).max(0.0);
-        let i = (self.ri * self.ri - u2).max(0.0);
-        if self.ri == 0.0 {
-            return o / 3.0;
+    /// Q(u)/t(u) of a solid circle for the chord at distance |u| from the neutral axis:
+    /// Q = ⅔(ro² − u²)^{3/2}, t = 2√(ro² − u²), so Q/t = (ro² − u²)/3.
+    fn q_over_t_solid(&self, u: f64) -> f64 {
+        (self.ro * self.ro - u * u).max(0.0) / 3.0
+    }
+
+    /// The circumferential shear τxθ from the shear forces at the point at angle φ (sin φ = `s`,
+    /// cos φ = `c`, coordinates y, z), positive along the tangent t = (−sin φ, cos φ).
+    ///
+    /// Solid shaft: the chord through the point carries the Jourawski average V·Q/(I·t); the
+    /// stress at the chord's end is taken tangent to the perimeter with that average as its
+    /// component along V, so τt = avg / (t's component along V). At the surface this is
+    /// τ = V·ro²·|sin|/(3I), 4V/(3A) on the neutral axis.
+    ///
+    /// Tube: the wall is cut radially at φ; the part of the section between the cut and its
+    /// mirror carries Q = ⅔(ro³ − ri³)·sin φ, shared by the two cuts of length ro − ri:
+    /// τxθ = V·(ro³ − ri³)·sin φ / (3·I·(ro − ri)), uniform through the wall (the average on
+    /// the radial cut, as thin-wall shear-flow theory takes it; 2V/A on the neutral axis of a
+    /// thin tube, and the same as the chord average there for any tube). The chord construction
+    /// is not used for a tube: on the bore, where the tangent turns perpendicular to V, it
+    /// divides a finite average by a vanishing component and grows without bound.
+    fn transverse_shear(&self, loads: &Loads, s: f64, c: f64, y: f64, z: f64) -> f64 {
+        let pr = self.properties();
+        if self.ri > 0.0 {
+            let (o3, i3) = (self.ro * self.ro * self.ro, self.ri * self.ri * self.ri);
+            let k = (o3 - i3) / (3.0 * (self.ro - self.ri));
+            return k * (-loads.vy * s / pr.iz + loads.vz * c / pr.iy);
         }
-        let t = 2.0 * (fmath::sqrt(o) - fmath::sqrt(i));
-        if t <= 0.0 {
-            return 0.0;
-        }
-        2.0 / 3.0 * (o * fmath::sqrt(o) - i * fmath::sqrt(i)) / t
+        let along = |avg: f64, t_comp: f64| {
+            if t_comp.abs() < 1e-12 {
+                0.0
+            } else {
+                avg / t_comp
+            }
+        };
+        along(loads.vy * self.q_over_t_solid(y) / pr.iz, -s)
+            + along(loads.vz * self.q_over_t_solid(z) / pr.iy, c)
     }
 
     /// (σr, σθ, σx) from pressure at radius r.
@@ -133,17 +157,7 @@ impl Round {
         let (s, c) = (fmath::sin(phi), fmath::cos(phi));
         let (y, z) = (r * c, r * s);
         let sx = k.normal * (loads.n / pr.area + loads.my * z / pr.iy - loads.mz * y / pr.iz);
-        // Tangent t = (−sin φ, cos φ): the chord-average shear along V is t's component times τt.
-        let along = |avg: f64, t_comp: f64| {
-            if t_comp.abs() < 1e-12 {
-                0.0
-            } else {
-                avg / t_comp
-            }
-        };
-        let tau = loads.t * r / pr.jt
-            + along(loads.vy * self.q_over_t(y) / pr.iz, -s)
-            + along(loads.vz * self.q_over_t(z) / pr.iy, c);
+        let tau = loads.t * r / pr.jt + self.transverse_shear(loads, s, c, y, z);
         let (radial, hoop, axial) = self.pressure_stress(p, r)?;
         StressTensor::new(sx + axial, hoop, radial, k.shear * tau, 0.0, 0.0)
             .map_err(|_| SectionError::Load("the loads (overflow)"))

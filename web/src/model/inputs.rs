@@ -315,7 +315,7 @@ inputs! {
     /// Temperature change, K.
     DeltaT: "dT", "in-dt", Fixed("temperature change ΔT"), Temperature, "0", needed, Elastic,
         |_| true;
-    // The static verdict and its material (judge/verdict.rs).
+    // The static verdict and its material (judge/strength.rs).
     /// Required factor of safety.
     Required: "nreq", "in-nreq", Fixed("required factor of safety"), Ratio, "2", needed, Required,
         |_| true;
@@ -586,11 +586,24 @@ mod tests {
         for (i, row) in INPUTS.iter().enumerate() {
             assert!(core::ptr::eq(row.num.input(), &INPUTS[i]), "{:?}", row.num);
         }
-        for i in 0..MAX_GAUGES {
-            assert!(Num::all().contains(&Num::gauge_angle(i)));
-            assert!(Num::all().contains(&Num::gauge_reading(i)));
-        }
-        assert_eq!(INPUTS.len(), 18 + 2 * usize::from(MAX_GAUGES) + 18 + 6 + 4);
+        // The families the page indexes: every gauge has an angle and a reading, the second
+        // state has six components, each distinct.
+        let family = |f: fn(u8) -> Num, n: u8| {
+            let mut v: Vec<Num> = (0..n).map(f).collect();
+            v.dedup();
+            v.len()
+        };
+        assert_eq!(
+            family(Num::gauge_angle, MAX_GAUGES),
+            usize::from(MAX_GAUGES)
+        );
+        assert_eq!(
+            family(Num::gauge_reading, MAX_GAUGES),
+            usize::from(MAX_GAUGES)
+        );
+        assert_eq!(family(Num::second, 6), 6);
+        assert_eq!(Place::Gauges.numbers().len(), 2 * usize::from(MAX_GAUGES));
+        assert_eq!(Place::SecondState.numbers().len(), 6);
     }
 
     #[test]
