@@ -47,6 +47,28 @@ pub struct Marker {
     pub y: f64,
     /// Label.
     pub label: String,
+    /// Pixel position of the label's baseline start (kept clear of the other marker's label).
+    pub label_at: (f64, f64),
+}
+
+/// Room a marker label takes: its width (px, at the plot's 11 px text) and line height.
+const LABEL_W: f64 = 150.0;
+const LABEL_H: f64 = 14.0;
+
+/// Moves the lower of two marker labels whose boxes would overlap one line further down, so
+/// two maxima at (nearly) the same place keep both labels readable.
+fn separate_labels(markers: &mut [Marker]) {
+    if let [a, b] = markers {
+        let (upper, lower) = if a.label_at.1 <= b.label_at.1 {
+            (a, b)
+        } else {
+            (b, a)
+        };
+        let overlap_x = (upper.label_at.0 - lower.label_at.0).abs() < LABEL_W;
+        if overlap_x && lower.label_at.1 - upper.label_at.1 < LABEL_H {
+            lower.label_at.1 = upper.label_at.1 + LABEL_H;
+        }
+    }
 }
 
 /// The plot as data.
@@ -136,16 +158,21 @@ pub fn picture(
             points: s1_pts,
         });
     }
-    let mark = |role: &'static str, name: &str, c: &Critical| Marker {
-        role,
-        x: px(c.position),
-        y: py(c.value),
-        label: format!("{name} {} {unit}", format_sig(c.value, 4)),
+    let mark = |role: &'static str, name: &str, c: &Critical| {
+        let (x, y) = (px(c.position), py(c.value));
+        Marker {
+            role,
+            x,
+            y,
+            label: format!("{name} {} {unit}", format_sig(c.value, 4)),
+            label_at: ((x + 7.0).min(W - LABEL_W), (y - 7.0).max(12.0)),
+        }
     };
-    let markers = vec![
+    let mut markers = vec![
         mark("max-vm", "max σvm", &scan.max_von_mises),
         mark("max-s1", "max σ1", &scan.max_principal),
     ];
+    separate_labels(&mut markers);
     let y_ticks = nice_ticks(lo, hi, 6)
         .into_iter()
         .map(|v| (py(v), format_sig(v, 3)))
@@ -365,7 +392,7 @@ pub fn ScanPlot(
             let markers = p.markers.iter().map(|m| view! {
                 <g class=format!("marker {}", m.role) data-role=m.role>
                     <circle cx=format!("{:.2}", m.x) cy=format!("{:.2}", m.y) r="5"/>
-                    <text x=format!("{:.2}", (m.x + 7.0).min(W - 150.0)) y=format!("{:.2}", (m.y - 7.0).max(12.0))>{m.label.clone()}</text>
+                    <text x=format!("{:.2}", m.label_at.0) y=format!("{:.2}", m.label_at.1)>{m.label.clone()}</text>
                 </g>
             }).collect_view();
             let yt = p.y_ticks.iter().map(|(y, t)| view! {
@@ -472,6 +499,12 @@ mod tests {
             }
         }
         assert!(vm_marker.label.ends_with("MPa"));
+        // Two maxima at the same place: the labels sit on separate lines.
+        let (a, b) = (p.markers[0].label_at, p.markers[1].label_at);
+        assert!(
+            (a.0 - b.0).abs() >= LABEL_W || (a.1 - b.1).abs() >= LABEL_H,
+            "{a:?} {b:?}"
+        );
         assert_eq!(p.chosen, Some(LEFT));
     }
 
