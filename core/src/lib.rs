@@ -30,6 +30,7 @@ pub mod hooke;
 pub mod invariants;
 pub mod material;
 pub mod mohr;
+pub mod points;
 pub mod principal;
 pub mod rosette;
 pub mod section;

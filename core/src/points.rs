@@ -1,0 +1,226 @@
+//! Measures of many points at once, for tables of stress states (finite-element exports, gauge
+//! loggers): per point σ1 ≥ σ2 ≥ σ3, the absolute maximum shear τmax = (σ1 − σ3)/2, von Mises
+//! σvm = √(3·J2), the Tresca intensity σ1 − σ3, the triaxiality σm/σvm (NaN for a hydrostatic
+//! state, as in [`crate::equivalent`]) and the static factor of safety n = 1/f of a criterion
+//! ([`crate::criteria::failure_index`]; infinite when unloaded, NaN where the criterion does not
+//! apply). The ranking orders points worst first.
+//!
+//! The principal values come from the batch entry point [`crate::principal_values_into`]; every
+//! other measure is the same formula as for one point, so a row of a table and the same state
+//! typed in agree to the last bit (tested).
+
+use crate::criteria::{failure_index, Criterion};
+use crate::equivalent::DEVIATOR_FLOOR;
+use crate::error::StressError;
+use crate::fmath;
+use crate::invariants::{mean_stress, sqrt_j2};
+use crate::material::Strengths;
+use crate::principal::principal_values_into;
+use crate::tensor::StressTensor;
+use alloc::vec;
+use alloc::vec::Vec;
+use core::cmp::Ordering;
+
+/// The measures of one point, in the tensors' unit.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct PointMeasures {
+    /// Principal stresses σ1 ≥ σ2 ≥ σ3.
+    pub principal: [f64; 3],
+    /// Absolute maximum shear (σ1 − σ3)/2 ≥ 0.
+    pub tau_max: f64,
+    /// von Mises equivalent √(3·J2) ≥ 0.
+    pub von_mises: f64,
+    /// Tresca intensity σ1 − σ3 ≥ 0.
+    pub tresca: f64,
+    /// Triaxiality σm/σvm; NaN for a hydrostatic state.
+    pub triaxiality: f64,
+    /// Static factor of safety 1/f; +∞ when unloaded, NaN when the criterion does not apply.
+    pub factor: f64,
+}
+
+/// Which measure ranks the points.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Measure {
+    /// σ1 (highest first).
+    Sigma1,
+    /// σ2 (highest first).
+    Sigma2,
+    /// σ3 (lowest first: the most compressive).
+    Sigma3,
+    /// τmax (highest first).
+    TauMax,
+    /// von Mises (highest first).
+    VonMises,
+    /// Tresca intensity (highest first).
+    Tresca,
+    /// Triaxiality (highest first: the most tensile hydrostatic part).
+    Triaxiality,
+    /// Factor of safety (lowest first).
+    Factor,
+}
+
+impl Measure {
+    /// Every measure, in the order a table shows them.
+    pub const ALL: [Measure; 8] = [
+        Measure::Sigma1,
+        Measure::Sigma2,
+        Measure::Sigma3,
+        Measure::TauMax,
+        Measure::VonMises,
+        Measure::Tresca,
+        Measure::Triaxiality,
+        Measure::Factor,
+    ];
+
+    /// Its value for a point.
+    #[must_use]
+    pub fn of(self, m: &PointMeasures) -> f64 {
+        match self {
+            Measure::Sigma1 => m.principal[0],
+            Measure::Sigma2 => m.principal[1],
+            Measure::Sigma3 => m.principal[2],
+            Measure::TauMax => m.tau_max,
+            Measure::VonMises => m.von_mises,
+            Measure::Tresca => m.tresca,
+            Measure::Triaxiality => m.triaxiality,
+            Measure::Factor => m.factor,
+        }
+    }
+
+    /// Whether a lower value is worse (factor of safety, σ3).
+    #[must_use]
+    pub fn lower_is_worse(self) -> bool {
+        matches!(self, Measure::Factor | Measure::Sigma3)
+    }
+}
+
+/// The measures of every tensor (same unit as `strengths`), judged with `criterion`.
+///
+/// # Errors
+/// Never for well-formed input; the batch principal solver's length check is passed on.
+pub fn measure_all(
+    tensors: &[StressTensor],
+    criterion: Criterion,
+    strengths: &Strengths,
+) -> Result<Vec<PointMeasures>, StressError> {
+    let mut principal = vec![[0.0; 3]; tensors.len()];
+    principal_values_into(tensors, &mut principal)?;
+    Ok(tensors
+        .iter()
+        .zip(principal)
+        .map(|(t, p)| measure_one(t, p, criterion, strengths))
+        .collect())
+}
+
+fn measure_one(
+    t: &StressTensor,
+    p: [f64; 3],
+    criterion: Criterion,
+    strengths: &Strengths,
+) -> PointMeasures {
+    let von_mises = fmath::sqrt(3.0) * sqrt_j2(t);
+    let tresca = (p[0] - p[2]).max(0.0);
+    let defined = von_mises > DEVIATOR_FLOOR * t.frobenius_norm();
+    let factor = match failure_index(criterion, p, strengths) {
+        Ok(f) if f > 0.0 => 1.0 / f,
+        Ok(_) => f64::INFINITY,
+        Err(_) => f64::NAN,
+    };
+    PointMeasures {
+        principal: p,
+        tau_max: 0.5 * tresca,
+        von_mises,
+        tresca,
+        triaxiality: if defined {
+            mean_stress(t) / von_mises
+        } else {
+            f64::NAN
+        },
+        factor,
+    }
+}
+
+/// Indices of `measures`, worst first by `by`: NaN values last, ties kept in input order (so the
+/// earlier row comes first).
+#[must_use]
+pub fn worst_first(measures: &[PointMeasures], by: Measure) -> Vec<usize> {
+    let mut idx: Vec<usize> = (0..measures.len()).collect();
+    let key = |i: usize| by.of(&measures[i]);
+    idx.sort_by(|&a, &b| {
+        let (x, y) = (key(a), key(b));
+        match (x.is_nan(), y.is_nan()) {
+            (true, true) => Ordering::Equal,
+            (true, false) => Ordering::Greater,
+            (false, true) => Ordering::Less,
+            _ if by.lower_is_worse() => x.total_cmp(&y),
+            _ => y.total_cmp(&x),
+        }
+    });
+    idx
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::equivalent::Equivalent;
+    use crate::principal::principal_values;
+    use proptest::prelude::*;
+
+    fn steel() -> Strengths {
+        Strengths::try_new(Some(250.0), 420.0, None, 22.0, None).unwrap()
+    }
+
+    proptest! {
+        #[test]
+        fn a_row_agrees_with_the_same_state_typed_in(c in proptest::array::uniform6(-500.0f64..500.0)) {
+            let t = StressTensor::new(c[0], c[1], c[2], c[3], c[4], c[5]).unwrap();
+            let m = measure_all(&[t; 9], Criterion::VonMises, &steel()).unwrap();
+            let e = Equivalent::of(&t);
+            for r in &m {
+                // The batch path may differ from the one-point solver in the last bits only.
+                let p = principal_values(&t);
+                for (got, want) in r.principal.iter().zip(p) {
+                    prop_assert!((got - want).abs() <= 1e-12 * (1.0 + t.max_abs()));
+                }
+                prop_assert_eq!(r.von_mises, e.von_mises);
+                prop_assert!((r.tresca - e.tresca).abs() <= 1e-12 * (1.0 + t.max_abs()));
+                prop_assert_eq!(r.triaxiality.is_nan(), e.triaxiality.is_none());
+                if let Some(x) = e.triaxiality {
+                    prop_assert_eq!(r.triaxiality, x);
+                }
+                prop_assert!((r.factor * r.von_mises - 250.0).abs() <= 1e-9 * 250.0);
+            }
+        }
+    }
+
+    #[test]
+    fn unloaded_and_inapplicable_factors_are_marked() {
+        let zero = StressTensor::new(0.0, 0.0, 0.0, 0.0, 0.0, 0.0).unwrap();
+        let m = measure_all(&[zero], Criterion::VonMises, &steel()).unwrap();
+        assert_eq!(m[0].factor, f64::INFINITY);
+        assert!(m[0].triaxiality.is_nan());
+        // Grey iron has no yield strength: von Mises does not apply.
+        let iron = Strengths::try_new(None, 200.0, Some(700.0), 0.5, None).unwrap();
+        let t = StressTensor::plane(50.0, 0.0, 0.0).unwrap();
+        let m = measure_all(&[t], Criterion::VonMises, &iron).unwrap();
+        assert!(m[0].factor.is_nan());
+        let m = measure_all(&[t], Criterion::ModifiedMohr, &iron).unwrap();
+        assert!((m[0].factor - 4.0).abs() < 1e-12); // Sut/σ1 = 200/50
+    }
+
+    #[test]
+    fn the_worst_rows_come_first() {
+        let t = |sx: f64| StressTensor::plane(sx, 0.0, 0.0).unwrap();
+        let rows = [t(100.0), t(200.0), t(0.0), t(200.0), t(-300.0)];
+        let m = measure_all(&rows, Criterion::VonMises, &steel()).unwrap();
+        // Lowest factor first; ties keep file order; the unloaded row (n = ∞) last.
+        assert_eq!(worst_first(&m, Measure::Factor), vec![4, 1, 3, 0, 2]);
+        assert_eq!(worst_first(&m, Measure::VonMises), vec![4, 1, 3, 0, 2]);
+        assert_eq!(worst_first(&m, Measure::Sigma1), vec![1, 3, 0, 2, 4]);
+        assert_eq!(worst_first(&m, Measure::Sigma3)[0], 4);
+        // NaN sorts last whatever the direction.
+        let iron = Strengths::try_new(None, 200.0, None, 0.5, None).unwrap();
+        let m = measure_all(&rows, Criterion::VonMises, &iron).unwrap();
+        assert_eq!(worst_first(&m, Measure::Factor), vec![0, 1, 2, 3, 4]);
+    }
+}

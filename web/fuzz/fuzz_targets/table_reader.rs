@@ -1,0 +1,20 @@
+//! Any text as a table: sniffing and reading never panic, every row is kept or refused (the
+//! kept rows hold the table's column count of finite numbers, their lines rise), and the
+//! refusals kept never exceed those counted.
+#![no_main]
+
+use stresscase_web::formats::table::{read, sniff, KEEP_REFUSALS};
+
+libfuzzer_sys::fuzz_target!(|data: &[u8]| {
+    let text = String::from_utf8_lossy(data);
+    let Ok(shape) = sniff(&text) else { return };
+    for label in [None, Some(0)] {
+        let t = read(&text, &shape, label);
+        assert_eq!(t.values.len(), t.rows() * t.columns);
+        assert!(t.lines.windows(2).all(|w| w[0] < w[1]));
+        assert!(t.refused.len() <= KEEP_REFUSALS.min(t.refused_count));
+        for (i, v) in t.values.iter().enumerate() {
+            assert!(v.is_finite() || (label == Some(i % t.columns)), "{v}");
+        }
+    }
+});

@@ -1,0 +1,681 @@
+//! Tables of numbers from files or pasted text: finite-element exports and gauge-logger files.
+//!
+//! Accepted: comma, semicolon, tab or whitespace separated; with semicolons (as spreadsheets
+//! write them in much of Europe) or tabs a decimal comma is read too (`1,5` = 1.5); a header
+//! line or none; `#` comment lines; LF or CRLF line ends; a UTF-8 byte-order mark; quoted
+//! fields (comma, semicolon and tab tables, by the `csv` crate). Blank lines are not rows.
+//!
+//! Every row is kept or refused with its 1-based line number in the file, the column and the
+//! reason (a word, an empty cell, a non-finite number, too few cells); nothing is dropped
+//! silently. Numbers are read by Rust's own float parser (correctly rounded; no extra crate).
+//! A text that is empty, or has no numeric column, is refused as a whole.
+
+use core::fmt;
+
+/// How the cells of a line are separated.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Separator {
+    /// `,`
+    Comma,
+    /// `;` (decimal comma allowed)
+    Semicolon,
+    /// tab (decimal comma allowed)
+    Tab,
+    /// one or more spaces or tabs
+    Whitespace,
+}
+
+impl Separator {
+    /// How the page names it.
+    #[must_use]
+    pub fn name(self) -> &'static str {
+        match self {
+            Separator::Comma => "comma",
+            Separator::Semicolon => "semicolon",
+            Separator::Tab => "tab",
+            Separator::Whitespace => "spaces",
+        }
+    }
+
+    fn byte(self) -> u8 {
+        match self {
+            Separator::Comma => b',',
+            Separator::Semicolon => b';',
+            Separator::Tab | Separator::Whitespace => b'\t',
+        }
+    }
+}
+
+/// The shape of a table, found by [`sniff`] (the page shows it and lets the user change it).
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub struct Shape {
+    /// The separator.
+    pub separator: Separator,
+    /// Whether `1,5` reads as 1.5.
+    pub decimal_comma: bool,
+    /// The header's names, when the first row is a header.
+    pub header: Option<Vec<String>>,
+    /// Cells per row (the header's, or the first data row's).
+    pub columns: usize,
+}
+
+/// Why a whole text is refused.
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub enum TableError {
+    /// Nothing but blank and comment lines.
+    Empty,
+    /// No column of the first rows reads as numbers.
+    NoNumbers,
+    /// Not text at all (a NUL byte: a binary file).
+    Binary,
+}
+
+impl fmt::Display for TableError {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        f.write_str(match self {
+            TableError::Empty => "the file has no rows: only blank or # comment lines",
+            TableError::NoNumbers => "no column of numbers was found: this does not look like a table of stresses, strains or readings",
+            TableError::Binary => "this is not a text file (it holds binary data)",
+        })
+    }
+}
+
+/// Why one row is refused.
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub enum Reason {
+    /// A cell that is not a number (the text, shortened).
+    NotANumber(String),
+    /// An empty cell.
+    Empty,
+    /// inf or NaN.
+    NotFinite,
+    /// Fewer cells than the table has columns.
+    TooFew(usize),
+}
+
+impl fmt::Display for Reason {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        match self {
+            Reason::NotANumber(t) => write!(f, "“{t}” is not a number"),
+            Reason::Empty => f.write_str("the cell is empty"),
+            Reason::NotFinite => f.write_str("not a finite number"),
+            Reason::TooFew(n) => write!(f, "only {n} cells"),
+        }
+    }
+}
+
+/// A refused row.
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub struct Refusal {
+    /// 1-based line in the file.
+    pub line: usize,
+    /// 1-based column (for too few cells: the first missing one).
+    pub column: usize,
+    /// Why.
+    pub reason: Reason,
+}
+
+/// How many refusals are kept with their details (all are counted).
+pub const KEEP_REFUSALS: usize = 100;
+
+/// The numbers of a table, row-major.
+#[derive(Debug, Clone, PartialEq, Default)]
+pub struct Table {
+    /// Cells per row.
+    pub columns: usize,
+    /// `columns` numbers per kept row. A column the user marks as text (an id) is read as its
+    /// text in `labels` and NaN here.
+    pub values: Vec<f64>,
+    /// The 1-based file line of each kept row.
+    pub lines: Vec<u32>,
+    /// The text of the label column of each kept row, when there is one.
+    pub labels: Vec<String>,
+    /// The first [`KEEP_REFUSALS`] refused rows.
+    pub refused: Vec<Refusal>,
+    /// Every refused row, counted.
+    pub refused_count: usize,
+}
+
+impl Table {
+    /// Kept rows.
+    #[must_use]
+    pub fn rows(&self) -> usize {
+        self.lines.len()
+    }
+
+    /// Row `i`'s cells.
+    #[must_use]
+    pub fn row(&self, i: usize) -> &[f64] {
+        &self.values[i * self.columns..(i + 1) * self.columns]
+    }
+}
+
+/// Reads one cell as a finite number.
+///
+/// # Errors
+/// The reason, for a refusal.
+pub fn read_cell(cell: &str, decimal_comma: bool) -> Result<f64, Reason> {
+    let t = cell.trim();
+    if t.is_empty() {
+        return Err(Reason::Empty);
+    }
+    let parsed = if decimal_comma && t.contains(',') {
+        t.replacen(',', ".", 1).parse::<f64>()
+    } else {
+        t.parse::<f64>()
+    };
+    match parsed {
+        Ok(v) if v.is_finite() => Ok(v),
+        Ok(_) => Err(Reason::NotFinite),
+        Err(_) => Err(Reason::NotANumber(t.chars().take(24).collect())),
+    }
+}
+
+/// The text without a leading byte-order mark.
+fn strip_bom(text: &str) -> &str {
+    text.strip_prefix('\u{feff}').unwrap_or(text)
+}
+
+/// The first lines that are rows (not blank, not `#` comments), with their 1-based numbers.
+fn first_rows(text: &str, n: usize) -> Vec<(usize, &str)> {
+    text.lines()
+        .enumerate()
+        .filter(|(_, l)| !l.trim().is_empty() && !l.trim_start().starts_with('#'))
+        .take(n)
+        .map(|(i, l)| (i + 1, l))
+        .collect()
+}
+
+/// Splits a line the simple way (for sniffing; quotes are honoured by the reader itself).
+fn split(line: &str, sep: Separator) -> Vec<&str> {
+    match sep {
+        Separator::Whitespace => line.split_whitespace().collect(),
+        s => line.split(char::from(s.byte())).collect(),
+    }
+}
+
+/// Finds the separator, whether a decimal comma is used, and the header, from the first rows.
+///
+/// # Errors
+/// [`TableError`] for a text that is not a table.
+pub fn sniff(text: &str) -> Result<Shape, TableError> {
+    if text.as_bytes().contains(&0) {
+        return Err(TableError::Binary);
+    }
+    let text = strip_bom(text);
+    let rows = first_rows(text, 20);
+    if rows.is_empty() {
+        return Err(TableError::Empty);
+    }
+    // The separator that splits the first row into more than one cell, and at least half of
+    // the sampled rows into as many: the first of semicolon, tab, comma that does; else
+    // whitespace; else one column.
+    let fits = |sep: Separator| {
+        let n = split(rows[0].1, sep).len();
+        let same = rows
+            .iter()
+            .filter(|(_, l)| split(l, sep).len() == n)
+            .count();
+        n > 1 && 2 * same >= rows.len()
+    };
+    let separator = [
+        Separator::Semicolon,
+        Separator::Tab,
+        Separator::Comma,
+        Separator::Whitespace,
+    ]
+    .into_iter()
+    .find(|&s| fits(s))
+    .unwrap_or(Separator::Whitespace);
+    let decimal_comma = matches!(
+        separator,
+        Separator::Semicolon | Separator::Tab | Separator::Whitespace
+    ) && rows.iter().any(|(_, l)| {
+        split(l, separator)
+            .iter()
+            .any(|c| c.contains(',') && read_cell(c, true).is_ok())
+    });
+    let cells = |l: &str| -> Vec<String> {
+        split(l, separator)
+            .into_iter()
+            .map(|c| c.trim().trim_matches('"').to_string())
+            .collect()
+    };
+    let first = cells(rows[0].1);
+    let is_header = first.iter().any(|c| read_cell(c, decimal_comma).is_err());
+    let data: Vec<Vec<String>> = rows
+        .iter()
+        .skip(usize::from(is_header))
+        .map(|(_, l)| cells(l))
+        .collect();
+    let columns = first.len();
+    let numeric = (0..columns).any(|j| {
+        data.iter().any(|r| {
+            r.get(j)
+                .is_some_and(|c| read_cell(c, decimal_comma).is_ok())
+        })
+    });
+    if !numeric {
+        return Err(if data.is_empty() && is_header {
+            TableError::Empty
+        } else {
+            TableError::NoNumbers
+        });
+    }
+    Ok(Shape {
+        separator,
+        decimal_comma,
+        header: is_header.then_some(first),
+        columns,
+    })
+}
+
+/// Reads every row of `text` in `shape`. `label` is the column (0-based) read as text, if any.
+/// Extra cells beyond `shape.columns` are ignored.
+#[must_use]
+pub fn read(text: &str, shape: &Shape, label: Option<usize>) -> Table {
+    let text = strip_bom(text);
+    let mut t = Table {
+        columns: shape.columns,
+        ..Table::default()
+    };
+    let mut skip_header = shape.header.is_some();
+    let mut row = Vec::with_capacity(shape.columns);
+    let mut take = |t: &mut Table, line: usize, cells: &mut dyn Iterator<Item = &str>| {
+        row.clear();
+        let mut refusal = None;
+        let mut label_text = String::new();
+        let mut n = 0;
+        for (j, c) in cells.take(shape.columns).enumerate() {
+            n = j + 1;
+            if Some(j) == label {
+                label_text = c.trim().to_string();
+                row.push(f64::NAN);
+                continue;
+            }
+            match read_cell(c, shape.decimal_comma) {
+                Ok(v) => row.push(v),
+                Err(reason) => {
+                    refusal.get_or_insert(Refusal {
+                        line,
+                        column: j + 1,
+                        reason,
+                    });
+                    row.push(f64::NAN);
+                }
+            }
+        }
+        if n < shape.columns && refusal.is_none() {
+            refusal = Some(Refusal {
+                line,
+                column: n + 1,
+                reason: Reason::TooFew(n),
+            });
+        }
+        match refusal {
+            Some(r) => {
+                t.refused_count += 1;
+                if t.refused.len() < KEEP_REFUSALS {
+                    t.refused.push(r);
+                }
+            }
+            None => {
+                t.values.extend_from_slice(&row);
+                t.lines.push(u32::try_from(line).unwrap_or(u32::MAX));
+                if label.is_some() {
+                    t.labels.push(label_text);
+                }
+            }
+        }
+    };
+    match shape.separator {
+        Separator::Whitespace => {
+            for (i, l) in text.lines().enumerate() {
+                let s = l.trim();
+                if s.is_empty() || s.starts_with('#') {
+                    continue;
+                }
+                if skip_header {
+                    skip_header = false;
+                    continue;
+                }
+                take(&mut t, i + 1, &mut s.split_whitespace());
+            }
+        }
+        sep => {
+            let mut r = csv::ReaderBuilder::new()
+                .delimiter(sep.byte())
+                .has_headers(false)
+                .flexible(true)
+                .comment(Some(b'#'))
+                .from_reader(text.as_bytes());
+            let mut rec = csv::StringRecord::new();
+            // The csv reader's position is where it began looking for the record, before the
+            // line ends and comment lines it skipped, and its line count leaves comments out:
+            // skip those here and count line ends up to the record's first byte (records come
+            // in order, so this is one pass over the text).
+            let bytes = text.as_bytes();
+            let (mut counted_to, mut line_no) = (0usize, 1usize);
+            let mut line_at = |byte: u64| {
+                let mut b = usize::try_from(byte)
+                    .unwrap_or(bytes.len())
+                    .min(bytes.len());
+                loop {
+                    while b < bytes.len() && matches!(bytes[b], b'\r' | b'\n') {
+                        b += 1;
+                    }
+                    if b < bytes.len() && bytes[b] == b'#' {
+                        while b < bytes.len() && bytes[b] != b'\n' {
+                            b += 1;
+                        }
+                        continue;
+                    }
+                    break;
+                }
+                if b > counted_to {
+                    line_no += bytes[counted_to..b].iter().filter(|&&c| c == b'\n').count();
+                    counted_to = b;
+                }
+                line_no
+            };
+            loop {
+                match r.read_record(&mut rec) {
+                    Ok(false) => break,
+                    Ok(true) => {
+                        let line = rec.position().map_or(0, |p| line_at(p.byte()));
+                        if rec.iter().all(|c| c.trim().is_empty()) {
+                            continue;
+                        }
+                        if skip_header {
+                            skip_header = false;
+                            continue;
+                        }
+                        take(&mut t, line, &mut rec.iter());
+                    }
+                    Err(e) => {
+                        // Invalid UTF-8 in a record: refuse the row, go on.
+                        let line = e.position().map_or(0, |p| line_at(p.byte()));
+                        t.refused_count += 1;
+                        if t.refused.len() < KEEP_REFUSALS {
+                            t.refused.push(Refusal {
+                                line,
+                                column: 1,
+                                reason: Reason::NotANumber("(not text)".into()),
+                            });
+                        }
+                    }
+                }
+            }
+        }
+    }
+    t
+}
+
+/// What a column holds, as the user confirms it (guessed from the header by [`guess_kinds`]).
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum ColumnKind {
+    /// Not used.
+    Skip,
+    /// A row's id or label (node number, point name), read as text.
+    Label,
+    /// Time (for plots against time).
+    Time,
+    /// A stress component, tensor order: σx, σy, σz, τxy, τyz, τzx.
+    Stress(u8),
+    /// A rosette gauge's reading (0-based gauge).
+    Gauge(u8),
+    /// A strain component: εx, εy, εz, γxy, γyz, γzx (engineering shear strains).
+    Strain(u8),
+}
+
+/// The header name with case, spaces, separators and a trailing unit in brackets removed.
+fn normalize(name: &str) -> String {
+    let cut = name.find(['(', '[']).map_or(name, |i| &name[..i]);
+    cut.chars()
+        .filter(|c| !matches!(c, ' ' | '_' | '-' | '.' | '"' | '\''))
+        .flat_map(char::to_lowercase)
+        .collect()
+}
+
+/// The trailing gauge number (1-based in the name) of names like `g2`, `gauge 2`, `SG2`,
+/// `ch3`, `grid1`, or a rosette grid letter `a`, `b`, `c`.
+fn gauge_number(n: &str) -> Option<u8> {
+    match n {
+        "a" => return Some(0),
+        "b" => return Some(1),
+        "c" => return Some(2),
+        _ => {}
+    }
+    for prefix in ["gauge", "grid", "sg", "ch", "g", "dms"] {
+        if let Some(d) = n.strip_prefix(prefix) {
+            if let Ok(k) = d.parse::<u8>() {
+                if (1..=8).contains(&k) {
+                    return Some(k - 1);
+                }
+            }
+        }
+    }
+    None
+}
+
+/// Guesses one column's kind from its header name.
+#[must_use]
+pub fn guess_kind(name: &str) -> ColumnKind {
+    let n = normalize(name);
+    let n = n.as_str();
+    const STRESS: [&[&str]; 6] = [
+        &["sx", "σx", "sxx", "s11", "sigmax", "sigmaxx", "σxx"],
+        &["sy", "σy", "syy", "s22", "sigmay", "sigmayy", "σyy"],
+        &["sz", "σz", "szz", "s33", "sigmaz", "sigmazz", "σzz"],
+        &["txy", "τxy", "sxy", "s12", "tauxy", "syx", "s21"],
+        &["tyz", "τyz", "syz", "s23", "tauyz", "szy", "s32"],
+        &[
+            "tzx", "τzx", "szx", "s31", "tauzx", "sxz", "s13", "txz", "τxz", "tauxz",
+        ],
+    ];
+    const STRAIN: [&[&str]; 6] = [
+        &["ex", "εx", "exx", "e11", "epsx", "epsilonx", "εxx"],
+        &["ey", "εy", "eyy", "e22", "epsy", "epsilony", "εyy"],
+        &["ez", "εz", "ezz", "e33", "epsz", "epsilonz", "εzz"],
+        &["gxy", "γxy", "gammaxy"],
+        &["gyz", "γyz", "gammayz"],
+        &["gzx", "γzx", "gammazx", "gxz", "γxz", "gammaxz"],
+    ];
+    if [
+        "id", "node", "nodeid", "element", "elem", "label", "point", "name", "no", "nr",
+    ]
+    .contains(&n)
+    {
+        return ColumnKind::Label;
+    }
+    if ["t", "time", "times", "zeit", "timestamp", "temps", "tiempo"].contains(&n) {
+        return ColumnKind::Time;
+    }
+    for (k, names) in (0u8..).zip(STRESS) {
+        if names.contains(&n) {
+            return ColumnKind::Stress(k);
+        }
+    }
+    for (k, names) in (0u8..).zip(STRAIN) {
+        if names.contains(&n) {
+            return ColumnKind::Strain(k);
+        }
+    }
+    gauge_number(n).map_or(ColumnKind::Skip, ColumnKind::Gauge)
+}
+
+/// Every column's guessed kind: from the header when there is one; without a header, six
+/// columns are taken as σx σy σz τxy τyz τzx and three as σx σy τxy (the plane case), and
+/// anything else is left for the user to say.
+#[must_use]
+pub fn guess_kinds(shape: &Shape) -> Vec<ColumnKind> {
+    match &shape.header {
+        Some(h) => h.iter().map(|n| guess_kind(n)).collect(),
+        None => match shape.columns {
+            6 => (0..6).map(ColumnKind::Stress).collect(),
+            3 => vec![
+                ColumnKind::Stress(0),
+                ColumnKind::Stress(1),
+                ColumnKind::Stress(3),
+            ],
+            n => vec![ColumnKind::Skip; n],
+        },
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    fn shape_and_table(text: &str) -> (Shape, Table) {
+        let s = sniff(text).unwrap();
+        let t = read(text, &s, None);
+        (s, t)
+    }
+
+    #[test]
+    fn comma_with_header_comments_and_crlf() {
+        let text = "# exported from the model\r\nnode,sx,sy,txy\r\n1,10,-2.5,3e1\r\n\r\n# a note\r\n2,\"11\",0,0\r\n";
+        let (s, t) = shape_and_table(text);
+        assert_eq!(s.separator, Separator::Comma);
+        assert!(!s.decimal_comma);
+        assert_eq!(
+            s.header.as_deref(),
+            Some(&["node", "sx", "sy", "txy"].map(String::from)[..])
+        );
+        assert_eq!(t.rows(), 2);
+        assert_eq!(t.row(0), &[1.0, 10.0, -2.5, 30.0]);
+        assert_eq!(t.row(1), &[2.0, 11.0, 0.0, 0.0]);
+        assert_eq!(t.lines, vec![3, 6]);
+        assert_eq!(t.refused_count, 0);
+    }
+
+    #[test]
+    fn semicolon_with_decimal_comma_and_bom() {
+        let text = "\u{feff}Zeit;SG1;SG2;SG3\n0,000;612,5;-20,25;-180\n0,001;613;-20,5;-181,75\n";
+        let (s, t) = shape_and_table(text);
+        assert_eq!(s.separator, Separator::Semicolon);
+        assert!(s.decimal_comma);
+        assert_eq!(s.header.as_ref().unwrap()[0], "Zeit");
+        assert_eq!(t.row(1), &[0.001, 613.0, -20.5, -181.75]);
+    }
+
+    #[test]
+    fn tab_and_whitespace_without_header() {
+        let (s, t) = shape_and_table("1\t2\t3\n4\t5\t6\n");
+        assert_eq!(
+            (s.separator, s.header.is_none(), s.columns),
+            (Separator::Tab, true, 3)
+        );
+        assert_eq!(t.values, vec![1.0, 2.0, 3.0, 4.0, 5.0, 6.0]);
+        let (s, t) = shape_and_table("  1.5   2  3\n4 5    6\n");
+        assert_eq!(s.separator, Separator::Whitespace);
+        assert_eq!(t.row(0), &[1.5, 2.0, 3.0]);
+        // One column is a table too (a history).
+        let (s, t) = shape_and_table("12\n-3\n4.5\n");
+        assert_eq!((s.columns, t.rows()), (1, 3));
+    }
+
+    #[test]
+    fn bad_rows_are_refused_with_line_column_and_reason() {
+        let text = "sx,sy\n1,2\nabc,3\n4,\n5,inf\n6\n7,8\n";
+        let (_, t) = shape_and_table(text);
+        assert_eq!(t.rows(), 2);
+        assert_eq!(t.lines, vec![2, 7]);
+        assert_eq!(t.refused_count, 4);
+        let got: Vec<(usize, usize, String)> = t
+            .refused
+            .iter()
+            .map(|r| (r.line, r.column, r.reason.to_string()))
+            .collect();
+        assert_eq!(
+            got,
+            vec![
+                (3, 1, "“abc” is not a number".to_string()),
+                (4, 2, "the cell is empty".to_string()),
+                (5, 2, "not a finite number".to_string()),
+                (6, 2, "only 1 cells".to_string()),
+            ]
+        );
+    }
+
+    #[test]
+    fn a_label_column_is_kept_as_text() {
+        let text = "point;sx\nA-12;1,5\nB 3;2\n";
+        let s = sniff(text).unwrap();
+        let t = read(text, &s, Some(0));
+        assert_eq!(t.labels, vec!["A-12", "B 3"]);
+        assert_eq!(t.row(0)[1], 1.5);
+    }
+
+    #[test]
+    fn texts_that_are_not_tables_are_refused_whole() {
+        assert_eq!(sniff(""), Err(TableError::Empty));
+        assert_eq!(sniff("# only\n\n   \n"), Err(TableError::Empty));
+        assert_eq!(sniff("name,part\nshaft,A\n"), Err(TableError::NoNumbers));
+        assert_eq!(
+            sniff("Dear reader,\nthis is a letter.\n"),
+            Err(TableError::NoNumbers)
+        );
+        assert_eq!(sniff("PK\u{3}\u{4}\0\0"), Err(TableError::Binary));
+        assert_eq!(sniff("sx,sy\n"), Err(TableError::Empty));
+    }
+
+    #[test]
+    fn many_refusals_are_counted_but_few_kept() {
+        let mut text = String::from("sx\n1\n");
+        for _ in 0..250 {
+            text.push_str("x\n");
+        }
+        let (_, t) = shape_and_table(&text);
+        assert_eq!((t.refused_count, t.refused.len()), (250, KEEP_REFUSALS));
+    }
+
+    #[test]
+    fn column_kinds_are_guessed_from_common_header_names() {
+        use ColumnKind::{Gauge, Label, Skip, Strain, Stress, Time};
+        let kinds: Vec<ColumnKind> = [
+            "Node ID",
+            "S11 (MPa)",
+            "S22",
+            "S33",
+            "S12",
+            "S23",
+            "S13",
+            "time [s]",
+            "SG1",
+            "gauge 2",
+            "C",
+            "εx",
+            "gamma_xy",
+            "temperature",
+        ]
+        .iter()
+        .map(|n| guess_kind(n))
+        .collect();
+        assert_eq!(
+            kinds,
+            vec![
+                Label,
+                Stress(0),
+                Stress(1),
+                Stress(2),
+                Stress(3),
+                Stress(4),
+                Stress(5),
+                Time,
+                Gauge(0),
+                Gauge(1),
+                Gauge(2),
+                Strain(0),
+                Strain(3),
+                Skip
+            ]
+        );
+        assert_eq!(guess_kind("σx"), Stress(0));
+        assert_eq!(guess_kind("tau_zx"), Stress(5));
+        assert_eq!(guess_kind("g9"), Skip);
+        let s = sniff("1 2 3\n4 5 6\n").unwrap();
+        assert_eq!(guess_kinds(&s), vec![Stress(0), Stress(1), Stress(3)]);
+    }
+}
