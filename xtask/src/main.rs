@@ -301,6 +301,8 @@ fn test() -> Result {
         args.extend_from_slice(features);
         run(&c, &args)?;
     }
+    // The table tests compare with Python's csv module (standard library) and numpy.
+    ensure_python_module("numpy")?;
     run(&c, &["test", "--workspace"])?;
     build_page()?;
     let dist = root().join("dist");

@@ -10,6 +10,7 @@
 //! silently. Numbers are read by Rust's own float parser (correctly rounded; no extra crate).
 //! A text that is empty, or has no numeric column, is refused as a whole.
 
+use crate::model::table::ColumnKind;
 use core::fmt;
 
 /// How the cells of a line are separated.
@@ -409,23 +410,6 @@ pub fn read(text: &str, shape: &Shape, label: Option<usize>) -> Table {
         }
     }
     t
-}
-
-/// What a column holds, as the user confirms it (guessed from the header by [`guess_kinds`]).
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
-pub enum ColumnKind {
-    /// Not used.
-    Skip,
-    /// A row's id or label (node number, point name), read as text.
-    Label,
-    /// Time (for plots against time).
-    Time,
-    /// A stress component, tensor order: σx, σy, σz, τxy, τyz, τzx.
-    Stress(u8),
-    /// A rosette gauge's reading (0-based gauge).
-    Gauge(u8),
-    /// A strain component: εx, εy, εz, γxy, γyz, γzx (engineering shear strains).
-    Strain(u8),
 }
 
 /// The header name with case, spaces, separators and a trailing unit in brackets removed.

@@ -11,3 +11,4 @@ pub mod inputs;
 pub mod judge;
 pub mod numfmt;
 pub mod source;
+pub mod table;
