@@ -19,7 +19,6 @@ use crate::principal::principal_values_into;
 use crate::tensor::StressTensor;
 use alloc::vec;
 use alloc::vec::Vec;
-use core::cmp::Ordering;
 
 /// The measures of one point, in the tensors' unit.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -144,19 +143,23 @@ fn measure_one(
 /// earlier row comes first).
 #[must_use]
 pub fn worst_first(measures: &[PointMeasures], by: Measure) -> Vec<usize> {
-    let mut idx: Vec<usize> = (0..measures.len()).collect();
-    let key = |i: usize| by.of(&measures[i]);
-    idx.sort_by(|&a, &b| {
-        let (x, y) = (key(a), key(b));
-        match (x.is_nan(), y.is_nan()) {
-            (true, true) => Ordering::Equal,
-            (true, false) => Ordering::Greater,
-            (false, true) => Ordering::Less,
-            _ if by.lower_is_worse() => x.total_cmp(&y),
-            _ => y.total_cmp(&x),
-        }
+    // Sort (NaN?, key, index) triples held together: a cheap comparison on contiguous data,
+    // and the index makes the unstable sort give the stable order.
+    let sign = if by.lower_is_worse() { 1.0 } else { -1.0 };
+    let mut keyed: Vec<(bool, f64, usize)> = measures
+        .iter()
+        .enumerate()
+        .map(|(i, m)| {
+            let v = by.of(m);
+            (v.is_nan(), if v.is_nan() { 0.0 } else { sign * v + 0.0 }, i)
+        })
+        .collect();
+    keyed.sort_unstable_by(|a, b| {
+        a.0.cmp(&b.0)
+            .then_with(|| a.1.total_cmp(&b.1))
+            .then_with(|| a.2.cmp(&b.2))
     });
-    idx
+    keyed.into_iter().map(|(_, _, i)| i).collect()
 }
 
 #[cfg(test)]

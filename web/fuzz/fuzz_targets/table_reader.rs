@@ -13,6 +13,9 @@ libfuzzer_sys::fuzz_target!(|data: &[u8]| {
         assert_eq!(t.values.len(), t.rows() * t.columns);
         assert!(t.lines.windows(2).all(|w| w[0] < w[1]));
         assert!(t.refused.len() <= KEEP_REFUSALS.min(t.refused_count));
+        let labelled = if label.is_some() { t.rows() } else { 0 };
+        assert_eq!(t.label_ends.len(), labelled);
+        assert!((0..t.rows()).all(|i| t.label(i).is_some() == label.is_some()));
         for (i, v) in t.values.iter().enumerate() {
             assert!(v.is_finite() || (label == Some(i % t.columns)), "{v}");
         }
