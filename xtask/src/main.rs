@@ -346,16 +346,14 @@ fn ensure_python_module(module: &str) -> Result {
 
 fn bench() -> Result {
     ensure_python_module("numpy")?;
-    run(
-        &cargo(),
-        &[
-            "bench",
-            "-p",
-            "stresscase-tests",
-            "--bench",
-            "principal_speed",
-        ],
-    )
+    ensure_python_module("pandas")?;
+    for bench in ["principal_speed", "table_speed"] {
+        run(
+            &cargo(),
+            &["bench", "-p", "stresscase-tests", "--bench", bench],
+        )?;
+    }
+    Ok(())
 }
 
 fn refdata() -> Result {
