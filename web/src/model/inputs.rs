@@ -5,8 +5,9 @@
 //! that uses a number reads it in its `evaluate`. Adding a number to a path is one row here plus
 //! its use there.
 
-use super::choices::{Choices, Cycle, Endurance, Layout, MaterialPick, Source};
-use super::choices::{Condition, SectionKind};
+use super::choices::{
+    Choices, Condition, Cycle, Endurance, Layout, MaterialPick, SectionKind, Source,
+};
 use stresscase_core::section::Face;
 use stresscase_core::AngleUnit;
 use SectionKind::{Rectangle, SolidRound, ThinCylinder, ThinSphere, Tube};

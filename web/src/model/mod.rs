@@ -1,7 +1,9 @@
 //! The case model: raw text → validated case → results, one way. `entry` reads one typed
-//! number, `numfmt` writes one, `source` turns the case's inputs into a stress tensor (one
-//! module per path), `judge` judges it against the material (static and fatigue), and `case`
-//! holds the form, validates it into a [`case::Case`] and composes the evaluation.
+//! number and `numfmt` writes one; `choices` and `inputs` declare what a case holds (every
+//! typed number one row of `inputs`); `source` turns the case's inputs into a stress tensor
+//! (one module per path) and `judge` judges it against the material (static and fatigue);
+//! `case` holds the form and validates it into a [`case::Case`]; `evaluation` takes that to
+//! every result; `table` does the same for each row of a table of many points.
 
 pub mod case;
 pub mod choices;
