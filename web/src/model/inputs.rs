@@ -3,7 +3,8 @@
 //! value, whether it may be left empty, where on the page its field is drawn, and when it is
 //! used. The form, the panels, the link, the calc sheet and the tests read this table; the path
 //! that uses a number reads it in its `evaluate`. Adding a number to a path is one row here plus
-//! its use there.
+//! its use there. (Over 600 lines on purpose: most of the file is the one table, which is the
+//! point of having one.)
 
 use super::choices::{
     Choices, Condition, Cycle, Endurance, Layout, MaterialPick, SectionKind, Source,
