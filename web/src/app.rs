@@ -27,6 +27,7 @@ use crate::panels::{
     strain_entry::StrainEntry,
     stress_element::StressElement,
     stress_entry::StressEntry,
+    table_view::TableView,
     verdict::Verdict,
 };
 use leptos::prelude::*;
@@ -170,6 +171,7 @@ pub fn App() -> impl IntoView {
             <FatigueCheck form=form shown=shown stale=stale/>
         </div>
         <ResultsPanel shown=shown stale=stale/>
+        <TableView form=form shown=shown/>
         <footer class="conventions" id="conventions">
             <h2>"Conventions"</h2>
             <ul>

@@ -325,6 +325,8 @@ fn test() -> Result {
             "page_trust",
             "--test",
             "page_sheet",
+            "--test",
+            "page_table",
             "--",
             "--ignored",
             "--test-threads=2",

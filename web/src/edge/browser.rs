@@ -283,16 +283,19 @@ pub fn export_png(id: &str, name: &str) -> Result<(), String> {
 ///
 /// # Errors
 /// When no file is chosen or it cannot be read.
-pub async fn read_chosen_file(input: &web_sys::HtmlInputElement) -> Result<String, String> {
+pub async fn read_chosen_file(
+    input: &web_sys::HtmlInputElement,
+    max_bytes: usize,
+    what: &str,
+) -> Result<String, String> {
     let file = input
         .files()
         .and_then(|f| f.get(0))
         .ok_or("no file chosen")?;
-    if file.size() > crate::formats::saved::MAX_FILE as f64 {
+    if file.size() > max_bytes as f64 {
         return Err(format!(
-            "the file is {} bytes; saved cases files are at most {}",
-            file.size(),
-            crate::formats::saved::MAX_FILE
+            "the file is {} bytes; a {what} file is at most {max_bytes}",
+            file.size()
         ));
     }
     let text = wasm_bindgen_futures::JsFuture::from(file.text())
@@ -300,4 +303,19 @@ pub async fn read_chosen_file(input: &web_sys::HtmlInputElement) -> Result<Strin
         .map_err(|e| describe(&e))?;
     text.as_string()
         .ok_or_else(|| "the file is not text".into())
+}
+
+/// Scrolls the element `#id` into view and moves the keyboard focus to it (when it can take
+/// focus); nothing when there is no such element.
+pub fn show_element(id: &str) {
+    let Some(e) = web_sys::window()
+        .and_then(|w| w.document())
+        .and_then(|d| d.get_element_by_id(id))
+    else {
+        return;
+    };
+    e.scroll_into_view();
+    if let Ok(h) = e.dyn_into::<web_sys::HtmlElement>() {
+        let _ = h.focus();
+    }
 }

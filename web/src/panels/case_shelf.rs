@@ -99,7 +99,9 @@ pub fn CaseShelf(
     };
     let import = move |input: web_sys::HtmlInputElement| {
         spawn_local(async move {
-            let read = browser::read_chosen_file(&input).await;
+            let read =
+                browser::read_chosen_file(&input, crate::formats::saved::MAX_FILE, "saved cases")
+                    .await;
             let parsed = read.and_then(|t| Library::from_json(&t).map_err(|e| e.to_string()));
             match parsed {
                 Ok(other) => match library.try_update(|l| l.merge(other)).unwrap_or(Ok(0)) {

@@ -25,4 +25,5 @@ pub mod strain_circle;
 pub mod strain_entry;
 pub mod stress_element;
 pub mod stress_entry;
+pub mod table_view;
 pub mod verdict;

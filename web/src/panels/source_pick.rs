@@ -50,6 +50,9 @@ pub fn SourcePick(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> 
                     </label>
                 }).collect_view()}
             </div>
+            <p class="hint">"Many points — an FE export or a logger file? "
+                <button type="button" id="to-table" on:click=move |_| crate::edge::browser::show_element("table-heading")>"Go to the table"</button>
+            </p>
         </fieldset>
     }
 }
