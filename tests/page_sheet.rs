@@ -8,7 +8,6 @@
 use serde_json::Value;
 use std::path::{Path, PathBuf};
 use std::process::Command;
-use std::time::{Duration, Instant};
 use stresscase_tests::check::target_dir;
 use stresscase_tests::page::{Page, WAIT};
 
@@ -340,33 +339,6 @@ fn the_calc_sheet_prints_the_case_with_its_link() {
     p.no_console_errors();
 }
 
-/// The file the page handed to the browser as the download `name`, as a data URL. (Headless
-/// Chromium holds finished downloads for a check it cannot make offline, so the content is read
-/// from the Blob the page made; the download's name from DevTools' event.)
-fn downloaded(p: &mut Page, name: &str) -> Vec<u8> {
-    use base64::Engine as _;
-    let start = Instant::now();
-    loop {
-        p.b.eval("0").unwrap(); // reads the events that arrived
-        let begun = p.b.events_named("Page.downloadWillBegin");
-        if let Some(i) = begun.iter().rposition(|e| e["suggestedFilename"] == name) {
-            let url = begun[i]["url"].as_str().unwrap_or_default().to_string();
-            let data = p.text(&format!(
-                "(async () => {{ const b = (window.__blobs || {{}})[{url:?}]; if (!b) return ''; return await new Promise(r => {{ const f = new FileReader(); f.onload = () => r(f.result); f.readAsDataURL(b); }}); }})()"
-            ));
-            let b64 = data.split_once(',').map(|(_, d)| d).unwrap_or_default();
-            return base64::engine::general_purpose::STANDARD
-                .decode(b64)
-                .unwrap_or_else(|e| panic!("{name}: {e}"));
-        }
-        assert!(
-            start.elapsed() < Duration::from_secs(20),
-            "{name} was never offered as a download"
-        );
-        std::thread::sleep(Duration::from_millis(100));
-    }
-}
-
 #[test]
 #[ignore = "needs the built page: run `cargo xtask test`"]
 fn drawings_export_as_svg_and_png_and_results_as_csv() {
@@ -374,16 +346,10 @@ fn drawings_export_as_svg_and_png_and_results_as_csv() {
     let dir = target_dir().join(format!("browser/exports-{}", std::process::id()));
     let _ = std::fs::remove_dir_all(&dir);
     let mut p = Page::open();
-    p.b.add_init_script(
-        "const keep = URL.createObjectURL; URL.createObjectURL = function (b) { const u = keep.call(URL, b); (window.__blobs = window.__blobs || {})[u] = b; return u; };",
-    )
-    .unwrap();
-    p.b.reload().unwrap();
-    p.wait_ready();
-    p.b.allow_downloads(&dir).unwrap();
+    p.capture_downloads(&dir);
     // SVG: a self-contained document that parses and holds the three circles.
     p.b.click("export-svg-mohr").unwrap();
-    let svg = String::from_utf8(downloaded(&mut p, "stresscase-mohr.svg")).unwrap();
+    let svg = String::from_utf8(p.downloaded("stresscase-mohr.svg")).unwrap();
     std::fs::create_dir_all(&dir).unwrap();
     std::fs::write(dir.join("stresscase-mohr.svg"), &svg).unwrap();
     assert!(svg.starts_with("<?xml") && svg.contains("<style>"));
@@ -406,7 +372,7 @@ fn drawings_export_as_svg_and_png_and_results_as_csv() {
         ),
     );
     p.b.click("export-png-mohr").unwrap();
-    let png = downloaded(&mut p, "stresscase-mohr.png");
+    let png = p.downloaded("stresscase-mohr.png");
     std::fs::write(dir.join("stresscase-mohr.png"), &png).unwrap();
     assert_eq!(&png[..8], b"\x89PNG\r\n\x1a\n");
     let b64 = base64::engine::general_purpose::STANDARD.encode(&png);
@@ -416,7 +382,7 @@ fn drawings_export_as_svg_and_png_and_results_as_csv() {
     assert_eq!(size, format!("{}x{}", 2.0 * w, 2.0 * h));
     // CSV: every numeric row of the results table, with the link in the header line.
     p.b.click("export-csv").unwrap();
-    let csv_text = String::from_utf8(downloaded(&mut p, "stresscase-results.csv")).unwrap();
+    let csv_text = String::from_utf8(p.downloaded("stresscase-results.csv")).unwrap();
     std::fs::write(dir.join("stresscase-results.csv"), &csv_text).unwrap();
     let (head, body) = csv_text.split_once('\n').unwrap();
     let href = p.text("location.href");

@@ -74,6 +74,7 @@ fn a_100k_row_stress_file_ranks_its_worst_row_and_opens_it() {
     std::fs::write(&path, &text).unwrap();
 
     let mut p = Page::open();
+    p.capture_downloads(&dir);
     p.b.click("to-table").unwrap();
     p.b.choose_file("table-file", &path).unwrap();
     wait_done(&mut p);
@@ -115,6 +116,44 @@ fn a_100k_row_stress_file_ranks_its_worst_row_and_opens_it() {
         .parse()
         .unwrap();
     assert!((vm - m[worst].von_mises).abs() <= 1e-12 * vm);
+    // Exports: every computed row with its measures, and the worst rows alone.
+    p.b.click("table-export-all").unwrap();
+    let all = String::from_utf8(p.downloaded("stresscase-all-rows.csv")).unwrap();
+    let (head, body) = all.split_once('\n').unwrap();
+    assert!(
+        head.starts_with("# Stresscase: rows of nodes.csv"),
+        "{head}"
+    );
+    let mut r = csv::Reader::from_reader(body.as_bytes());
+    let h = r.headers().unwrap().clone();
+    let col = |name: &str| h.iter().position(|x| x.starts_with(name)).unwrap();
+    let (c_line, c_vm, c_n) = (col("line"), col("von_mises [MPa]"), col("factor_of_safety"));
+    let mut n = 0;
+    for (k, rec) in r.records().enumerate() {
+        let rec = rec.unwrap();
+        assert_eq!(rec[c_line].parse::<usize>().unwrap(), lines[k]);
+        assert_eq!(
+            rec[c_vm].parse::<f64>().unwrap(),
+            m[k].von_mises,
+            "line {}",
+            lines[k]
+        );
+        assert_eq!(rec[c_n].parse::<f64>().unwrap(), m[k].factor);
+        n += 1;
+    }
+    assert_eq!(n, 99_997);
+    p.b.click("table-export-worst").unwrap();
+    let worst_csv = String::from_utf8(p.downloaded("stresscase-worst-rows.csv")).unwrap();
+    let mut r = csv::Reader::from_reader(worst_csv.split_once('\n').unwrap().1.as_bytes());
+    let firsts: Vec<usize> = r
+        .records()
+        .map(|x| x.unwrap()[0].parse().unwrap())
+        .collect();
+    let order = worst_first(&m, Measure::VonMises);
+    assert_eq!(
+        firsts,
+        order[..10].iter().map(|&k| lines[k]).collect::<Vec<_>>()
+    );
     // Opened as the case: its tensor on screen.
     p.b.click("table-open-1").unwrap();
     p.wait_value("sigma1", Principal::of(&tensors[worst]).sigma1());

@@ -208,4 +208,56 @@ impl Page {
         let path = target_dir().join("browser").join(format!("{name}.png"));
         self.b.screenshot(&path).expect("screenshot");
     }
+
+    /// Keeps every Blob the page makes a URL for, and lets downloads go to `dir`: headless
+    /// Chromium offline does not finish downloads, so [`Page::downloaded`] reads the Blob.
+    pub fn capture_downloads(&mut self, dir: &std::path::Path) {
+        self.b
+            .add_init_script(
+                "const keep = URL.createObjectURL; URL.createObjectURL = function (b) { const u = keep.call(URL, b); (window.__blobs = window.__blobs || {})[u] = b; return u; };",
+            )
+            .expect("init script");
+        self.b.reload().expect("reload");
+        self.wait_ready();
+        self.b.allow_downloads(dir).expect("downloads");
+    }
+
+    /// The bytes of the last download offered as `name` (after [`Page::capture_downloads`]).
+    pub fn downloaded(&mut self, name: &str) -> Vec<u8> {
+        use base64::Engine as _;
+        let start = std::time::Instant::now();
+        loop {
+            self.b.eval("0").expect("eval"); // reads the events that arrived
+            let begun = self.b.events_named("Page.downloadWillBegin");
+            if let Some(i) = begun.iter().rposition(|e| e["suggestedFilename"] == name) {
+                let url = begun[i]["url"].as_str().unwrap_or_default().to_string();
+                // Read in slices: one DevTools message holds at most 16 MiB.
+                let len = self
+                    .b
+                    .eval(&format!(
+                        "(async () => {{ const b = (window.__blobs || {{}})[{url:?}]; if (!b) return 0; window.__dl = await new Promise(r => {{ const f = new FileReader(); f.onload = () => r(f.result); f.readAsDataURL(b); }}); return window.__dl.length; }})()"
+                    ))
+                    .expect("read blob")
+                    .as_u64()
+                    .unwrap_or(0);
+                let mut data = String::new();
+                let step = 4_000_000;
+                for at in (0..len).step_by(step) {
+                    data.push_str(&self.text(&format!(
+                        "window.__dl.slice({at}, {})",
+                        at + step as u64
+                    )));
+                }
+                let b64 = data.split_once(',').map(|(_, d)| d).unwrap_or_default();
+                return base64::engine::general_purpose::STANDARD
+                    .decode(b64)
+                    .unwrap_or_else(|e| panic!("{name}: {e}"));
+            }
+            assert!(
+                start.elapsed() < Duration::from_secs(20),
+                "{name} was never offered as a download"
+            );
+            std::thread::sleep(Duration::from_millis(100));
+        }
+    }
 }

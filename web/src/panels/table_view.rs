@@ -4,7 +4,7 @@
 //! in this browser tab: it is not in the case link.
 
 use crate::edge::browser;
-use crate::formats::table::{guess_kinds, read, sniff, Shape, Table};
+use crate::formats::table::{guess_kinds, read, sniff, write_results, Shape, Table};
 use crate::model::case::{Case, CaseForm, Field, Mode};
 use crate::model::choices::Source;
 use crate::model::evaluation::Evaluation;
@@ -405,6 +405,54 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
         })
     };
 
+    let export_status = RwSignal::new(String::new());
+    // Saves every computed row (`worst` false) or the listed worst ones, with their measures.
+    let export = move |worst: bool| {
+        let Some(l) = loaded.get_untracked() else {
+            return;
+        };
+        let Some(by) = ranking() else {
+            export_status.set("Nothing computed to save yet.".into());
+            return;
+        };
+        let u = form.with_untracked(|f| f.unit);
+        let names: Vec<String> = l.shape.header.clone().unwrap_or_else(|| {
+            (1..=l.table.columns)
+                .map(|j| format!("column {j}"))
+                .collect()
+        });
+        let text = outcome.with_untracked(|o| match o {
+            Some(Ok(o)) => {
+                let order: Vec<usize> = if worst {
+                    worst_first(&o.measures, by).into_iter().take(TOP).collect()
+                } else {
+                    (0..o.rows.len()).collect()
+                };
+                Some(write_results(
+                    &l.table,
+                    &names,
+                    o,
+                    &order,
+                    u.symbol(),
+                    &l.from,
+                ))
+            }
+            _ => None,
+        });
+        let Some(text) = text else { return };
+        let name = if worst {
+            "stresscase-worst-rows.csv"
+        } else {
+            "stresscase-all-rows.csv"
+        };
+        let r = browser::download_as(name, &text, "text/csv");
+        export_status.set(
+            r.err()
+                .map(|e| format!("Not saved: {e}."))
+                .unwrap_or_default(),
+        );
+    };
+
     view! {
         <section class="panel table-view" id="panel-table" aria-labelledby="table-heading">
             <h2 class="panel-title" id="table-heading" tabindex="-1">"Many points: a table"</h2>
@@ -441,6 +489,11 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
             </div>
             {refusals}
             {top}
+            <div class="buttons export-row" hidden=move || ranking().is_none()>
+                <button type="button" id="table-export-all" on:click=move |_| export(false)>"Save all rows with their results as CSV"</button>
+                <button type="button" id="table-export-worst" on:click=move |_| export(true)>"Save the worst rows as CSV"</button>
+                <span class="status" role="status">{move || export_status.get()}</span>
+            </div>
         </section>
     }
 }
