@@ -243,10 +243,9 @@ impl Page {
                 let mut data = String::new();
                 let step = 4_000_000;
                 for at in (0..len).step_by(step) {
-                    data.push_str(&self.text(&format!(
-                        "window.__dl.slice({at}, {})",
-                        at + step as u64
-                    )));
+                    data.push_str(
+                        &self.text(&format!("window.__dl.slice({at}, {})", at + step as u64)),
+                    );
                 }
                 let b64 = data.split_once(',').map(|(_, d)| d).unwrap_or_default();
                 return base64::engine::general_purpose::STANDARD

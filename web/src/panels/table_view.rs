@@ -209,18 +209,33 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
     };
     let on_paste = move |_| take(paste.with_untracked(|t| load(t, "pasted text".into())));
 
-    // Recomputed when the table, its kinds or unit, or the case changes.
+    // What of the case the rows depend on: its choices, numbers and units — not the typed
+    // components, the turn, the probe's normal, the title or the note, so typing those does not
+    // recompute every row.
+    let case_key = Memo::new(move |_| {
+        form.with(|f| Case::from_form(f).ok()).map(|mut c| {
+            c.title.clear();
+            c.note.clear();
+            c.stress = [0.0; 6];
+            c.angle = 0.0;
+            c.normal = [1.0; 3];
+            c.mode = Mode::Plane;
+            c
+        })
+    });
+    // Recomputed when the table, its kinds or unit, or what the rows depend on changes.
     let outcome = Memo::new(move |_| {
         let l = loaded.get()?;
-        let case = form.with(|f| Case::from_form(f).ok())?;
-        shown.with(|e| {
+        let case = case_key.get()?;
+        let unit = unit.get();
+        shown.with_untracked(|e| {
             let e = e.as_ref()?;
             Some(
                 evaluate(
                     &l.table.values,
                     l.table.columns,
                     &l.kinds,
-                    unit.get(),
+                    unit,
                     &case,
                     &e.judgement,
                 )
