@@ -319,3 +319,18 @@ pub fn show_element(id: &str) {
         let _ = h.focus();
     }
 }
+
+/// Hands control back to the browser until its next task (a zero-delay timer), so it can paint
+/// and take input between pieces of long work.
+pub async fn yield_to_browser() {
+    let promise = js_sys::Promise::new(&mut |resolve, _reject| {
+        let queued = web_sys::window().is_some_and(|w| {
+            w.set_timeout_with_callback_and_timeout_and_arguments_0(&resolve, 0)
+                .is_ok()
+        });
+        if !queued {
+            let _ = resolve.call0(&JsValue::NULL);
+        }
+    });
+    let _ = wasm_bindgen_futures::JsFuture::from(promise).await;
+}

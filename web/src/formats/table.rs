@@ -496,6 +496,63 @@ impl<'a> LineIndex<'a> {
     }
 }
 
+/// Where to cut `text` into pieces of about `bytes` each, for reading a large table a piece at
+/// a time (between pieces the page hands control back to the browser): the byte offsets of the
+/// pieces' starts, each just after a line feed. A text with a quote character is not cut (a
+/// quoted cell may span lines), nor is one shorter than two pieces.
+#[must_use]
+pub fn pieces(text: &str, bytes: usize) -> Vec<usize> {
+    let b = text.as_bytes();
+    let mut starts = vec![0];
+    if b.contains(&b'"') || b.len() < 2 * bytes.max(1) {
+        return starts;
+    }
+    let mut at = bytes.max(1);
+    while at < b.len() {
+        match memchr::memchr(b'\n', &b[at..]) {
+            Some(i) if at + i + 1 < b.len() => {
+                starts.push(at + i + 1);
+                at += i + 1 + bytes;
+            }
+            _ => break,
+        }
+    }
+    starts
+}
+
+/// Line ends in `bytes` (`\n`, `\r\n` or a lone `\r`, each once): the lines a piece of text
+/// that ends just after a line feed adds.
+#[must_use]
+pub fn line_ends(bytes: &[u8]) -> usize {
+    let lf = memchr::memchr_iter(b'\n', bytes).count();
+    let lone_cr = memchr::memchr_iter(b'\r', bytes)
+        .filter(|&i| bytes.get(i + 1) != Some(&b'\n'))
+        .count();
+    lf + lone_cr
+}
+
+impl Table {
+    /// Appends the rows of `next`, a table read from a later piece of the same text whose
+    /// first line is line `lines_before + 1` of the whole.
+    pub fn append(&mut self, next: Table, lines_before: usize) {
+        let shift = u32::try_from(lines_before).unwrap_or(u32::MAX);
+        self.values.extend_from_slice(&next.values);
+        self.lines
+            .extend(next.lines.iter().map(|l| l.saturating_add(shift)));
+        let text_shift = u32::try_from(self.label_text.len()).unwrap_or(u32::MAX);
+        self.label_text.push_str(&next.label_text);
+        self.label_ends
+            .extend(next.label_ends.iter().map(|e| e.saturating_add(text_shift)));
+        for mut r in next.refused {
+            if self.refused.len() < KEEP_REFUSALS {
+                r.line += lines_before;
+                self.refused.push(r);
+            }
+        }
+        self.refused_count += next.refused_count;
+    }
+}
+
 /// The computed rows as CSV: a comment line saying where they come from, a header, then one
 /// record per row in `order` (indices into `out`): the file line, the label (when there is
 /// one), the row's own numbers, then σ1, σ2, σ3, τmax, von Mises, Tresca (in `unit`),

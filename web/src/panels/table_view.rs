@@ -4,7 +4,9 @@
 //! in this browser tab: it is not in the case link.
 
 use crate::edge::browser;
-use crate::formats::table::{guess_kinds, read, sniff, write_results, Shape, Table};
+use crate::formats::table::{
+    guess_kinds, line_ends, pieces, read, sniff, write_results, Shape, Table,
+};
 use crate::model::case::{Case, CaseForm, Field, Mode};
 use crate::model::choices::Source;
 use crate::model::evaluation::Evaluation;
@@ -176,6 +178,51 @@ fn load(text: &str, from: String) -> Result<Loaded, String> {
     })
 }
 
+/// Bytes read between two hand-backs to the browser.
+const PIECE: usize = 2 * 1024 * 1024;
+
+/// [`load`], a piece at a time: between pieces the browser paints `progress` (0–1) and takes
+/// input; `cancelled` is asked after each piece. `Ok(None)` when cancelled.
+async fn load_in_pieces(
+    text: String,
+    from: String,
+    progress: RwSignal<Option<f64>>,
+    cancelled: impl Fn() -> bool,
+) -> Result<Option<Loaded>, String> {
+    let shape = sniff(&text).map_err(|e| e.to_string())?;
+    let kinds = guess_kinds(&shape);
+    let label = kinds.iter().position(|k| *k == ColumnKind::Label);
+    let body = text.strip_prefix('\u{feff}').unwrap_or(&text);
+    let starts = pieces(body, PIECE);
+    let mut table = Table {
+        columns: shape.columns,
+        ..Table::default()
+    };
+    let mut lines_before = 0;
+    for (k, &s) in starts.iter().enumerate() {
+        let end = starts.get(k + 1).copied().unwrap_or(body.len());
+        let piece_shape = Shape {
+            header: if k == 0 { shape.header.clone() } else { None },
+            ..shape.clone()
+        };
+        table.append(read(&body[s..end], &piece_shape, label), lines_before);
+        lines_before += line_ends(&body.as_bytes()[s..end]);
+        if starts.len() > 1 {
+            progress.set(Some(end as f64 / body.len().max(1) as f64));
+            browser::yield_to_browser().await;
+            if cancelled() {
+                return Ok(None);
+            }
+        }
+    }
+    Ok(Some(Loaded {
+        from,
+        shape,
+        table: Arc::new(table),
+        kinds,
+    }))
+}
+
 /// The panel.
 #[component]
 pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
@@ -194,6 +241,8 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
         }
         Err(e) => problem.set(Some(format!("Nothing was changed: {e}."))),
     };
+    let progress = RwSignal::new(None::<f64>);
+    let cancel = RwSignal::new(false);
     let on_file = move |_| {
         let Some(input) = file_input.get_untracked() else {
             return;
@@ -202,9 +251,22 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
             .files()
             .and_then(|f| f.get(0))
             .map_or_else(|| "the file".into(), |f| f.name());
+        cancel.set(false);
+        progress.set(Some(0.0));
         spawn_local(async move {
             let read = browser::read_chosen_file(&input, MAX_TABLE_FILE, "table").await;
-            take(read.and_then(|text| load(&text, name)));
+            let result = match read {
+                Ok(text) => {
+                    load_in_pieces(text, name, progress, move || cancel.get_untracked()).await
+                }
+                Err(e) => Err(e),
+            };
+            progress.set(None);
+            match result {
+                Ok(Some(l)) => take(Ok(l)),
+                Ok(None) => problem.set(Some("Reading was cancelled; nothing was changed.".into())),
+                Err(e) => take(Err(e)),
+            }
         });
     };
     let on_paste = move |_| take(paste.with_untracked(|t| load(t, "pasted text".into())));
@@ -252,6 +314,17 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
     };
 
     let status = move || {
+        if let Some(f) = progress.get() {
+            return view! {
+                <div id="table-status" class="table-reading" data-rows="0" data-refused="0" data-done="false">
+                    <label>{format!("Reading the file: {:.0} %", 100.0 * f)}" "
+                        <progress id="table-progress" max="1" value=f.to_string()></progress>
+                    </label>" "
+                    <button type="button" id="table-cancel" on:click=move |_| cancel.set(true)>"Cancel"</button>
+                </div>
+            }
+            .into_any();
+        }
         let Some(l) = loaded.get() else {
             return view! {
                 <p id="table-status" class="hint" data-rows="0" data-refused="0" data-done="false">

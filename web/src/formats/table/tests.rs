@@ -167,3 +167,44 @@ fn a_lone_carriage_return_ends_a_line_everywhere() {
         assert_eq!(t.values, vec![1.0, 2.0, 3.0, 4.0]);
     }
 }
+
+#[test]
+fn a_table_read_in_pieces_is_the_table_read_whole() {
+    let mut text = String::from("\u{feff}# logger\r\nid;a;b\r\n");
+    for i in 0..3000 {
+        match i % 500 {
+            7 => text.push_str("# note\r\n\r\n"),
+            9 => text.push_str(&format!("p{i};x;1\r\n")),
+            11 => text.push_str(&format!("p{i};1\r")),
+            _ => text.push_str(&format!("p{i};{i},5;-{i}\r\n")),
+        }
+    }
+    let shape = sniff(&text).unwrap();
+    let whole = read(&text, &shape, Some(0));
+    let text = text.trim_start_matches('\u{feff}');
+    let starts = pieces(text, 4096);
+    assert!(starts.len() > 5, "{}", starts.len());
+    let mut t = Table {
+        columns: shape.columns,
+        ..Table::default()
+    };
+    let mut lines_before = 0;
+    for (k, &s) in starts.iter().enumerate() {
+        let end = starts.get(k + 1).copied().unwrap_or(text.len());
+        let piece_shape = Shape {
+            header: if k == 0 { shape.header.clone() } else { None },
+            ..shape.clone()
+        };
+        t.append(read(&text[s..end], &piece_shape, Some(0)), lines_before);
+        lines_before += line_ends(&text.as_bytes()[s..end]);
+    }
+    // Compared field by field (the label column holds NaN, which equals nothing).
+    let bits = |t: &Table| t.values.iter().map(|v| v.to_bits()).collect::<Vec<_>>();
+    assert!(bits(&t) == bits(&whole), "values differ");
+    assert!(t.lines == whole.lines, "lines differ");
+    assert!(t.label_text == whole.label_text && t.label_ends == whole.label_ends);
+    assert!(t.refused == whole.refused, "{:?}", &t.refused[..2]);
+    assert_eq!((t.refused_count, whole.refused_count), (12, 12));
+    assert_eq!(t.rows(), 3000 - 12 - 6); // 12 refused, 6 comment lines in place of rows
+    assert_eq!(pieces("a,\"b\"\n1,2\n", 1), vec![0]);
+}
