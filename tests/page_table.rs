@@ -24,6 +24,18 @@ fn status(p: &mut Page, attr: &str) -> String {
     ))
 }
 
+/// The first listed worst row: its file line and unrounded ranking value.
+fn first_listed(p: &mut Page) -> (usize, f64) {
+    let read = |p: &mut Page, what: &str| {
+        p.text(&format!(
+            "document.querySelector('#table-top li')?.dataset.{what} ?? ''"
+        ))
+    };
+    let row = read(p, "row").parse().expect("a listed row");
+    let value = read(p, "value").parse().expect("its value");
+    (row, value)
+}
+
 fn wait_done(p: &mut Page) {
     p.b.wait_for(
         "document.getElementById('table-status')?.dataset.done === 'true'",
@@ -92,14 +104,7 @@ fn a_100k_row_stress_file_ranks_its_worst_row_and_opens_it() {
     let steel = Strengths::try_new(Some(210.0), 380.0, None, 25.0, None).unwrap();
     let m = measure_all(&tensors, Criterion::VonMises, &steel).unwrap();
     let worst = worst_first(&m, Measure::Factor)[0];
-    let row: usize = p
-        .text("document.querySelector('#table-top li')?.dataset.row ?? ''")
-        .parse()
-        .unwrap();
-    let value: f64 = p
-        .text("document.querySelector('#table-top li')?.dataset.value ?? ''")
-        .parse()
-        .unwrap();
+    let (row, value) = first_listed(&mut p);
     assert_eq!(row, lines[worst]);
     assert!(
         (value - m[worst].factor).abs() <= 1e-12 * m[worst].factor,
@@ -111,10 +116,8 @@ fn a_100k_row_stress_file_ranks_its_worst_row_and_opens_it() {
     p.shot("table-100k");
     // Ranked by von Mises instead: the same worst row here (one criterion, one material).
     p.choose("table-rank", "vm");
-    let vm: f64 = p
-        .text("document.querySelector('#table-top li')?.dataset.value ?? ''")
-        .parse()
-        .unwrap();
+    let (vm_row, vm) = first_listed(&mut p);
+    assert_eq!(vm_row, lines[worst]);
     assert!((vm - m[worst].von_mises).abs() <= 1e-12 * vm);
     // Exports: every computed row with its measures, and the worst rows alone.
     p.b.click("table-export-all").unwrap();
@@ -191,14 +194,7 @@ fn a_rosette_logger_file_goes_through_the_cases_rosette() {
     wait_done(&mut p);
     assert_eq!(status(&mut p, "rows"), "500");
     p.choose("table-rank", "vm");
-    let row: usize = p
-        .text("document.querySelector('#table-top li')?.dataset.row ?? ''")
-        .parse()
-        .unwrap();
-    let value: f64 = p
-        .text("document.querySelector('#table-top li')?.dataset.value ?? ''")
-        .parse()
-        .unwrap();
+    let (row, value) = first_listed(&mut p);
     // Core's rosette reduction with the page's elastic constants for the default material
     // (AISI 1020: E = 207 GPa, ν = 0.292, as the page shows them).
     let steel = Elastic::try_new(207e9, 0.292).unwrap();

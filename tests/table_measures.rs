@@ -60,14 +60,7 @@ fn every_column_matches_numpy() {
     for (i, (t, m)) in tensors.iter().zip(&ours).enumerate() {
         let p = &np[8 * i..8 * i + 8];
         let size = t.max_abs();
-        let ours = [
-            m.principal[0],
-            m.principal[1],
-            m.principal[2],
-            m.tau_max,
-            m.von_mises,
-            m.tresca,
-        ];
+        let ours = m.stresses();
         for (k, (a, b)) in ours.iter().zip(p).enumerate() {
             assert!(
                 (a - b).abs() <= 1e-12 * size,

@@ -37,6 +37,15 @@ pub struct PointMeasures {
     pub factor: f64,
 }
 
+impl PointMeasures {
+    /// The measures in stress units, in table order: σ1, σ2, σ3, τmax, von Mises, Tresca.
+    #[must_use]
+    pub fn stresses(&self) -> [f64; 6] {
+        let [s1, s2, s3] = self.principal;
+        [s1, s2, s3, self.tau_max, self.von_mises, self.tresca]
+    }
+}
+
 /// Which measure ranks the points.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
 pub enum Measure {

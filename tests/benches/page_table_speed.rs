@@ -7,10 +7,9 @@
 //! Run after `cargo xtask build` and `cargo bench -p stresscase-tests --bench table_speed`
 //! (which writes the file): `cargo bench -p stresscase-tests --bench page_table_speed`.
 
-use std::process::Command;
 use std::time::Duration;
 use stresscase_tests::browser::Chromium;
-use stresscase_tests::check::{data_path, target_dir};
+use stresscase_tests::check::target_dir;
 use stresscase_tests::page::Page;
 use stresscase_tests::serve::StaticServer;
 
@@ -46,15 +45,7 @@ fn main() {
         assert_eq!(rows_done, rows.to_string());
     }
     let best = times.iter().copied().fold(f64::INFINITY, f64::min);
-    let peer = Command::new(std::env::var("PYTHON").unwrap_or_else(|_| "python3".into()))
-        .arg(data_path("peers/pandas_table.py"))
-        .arg(&path)
-        .env("OMP_NUM_THREADS", "1")
-        .env("OPENBLAS_NUM_THREADS", "1")
-        .output()
-        .expect("python3 with pandas and numpy");
-    let info: serde_json::Value =
-        serde_json::from_slice(peer.stdout.trim_ascii()).expect("peer JSON");
+    let info = stresscase_tests::peers::pandas_table(&path);
     let peer_s = info["seconds"].as_f64().expect("seconds");
     println!("{rows} rows × 6 components: file chosen → every row computed and ranked, best of 3");
     println!("{:<44} {:>9}", "", "seconds");

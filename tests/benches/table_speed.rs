@@ -10,13 +10,12 @@
 
 use rand::{Rng, SeedableRng};
 use std::fmt::Write as _;
-use std::process::Command;
 use std::time::Instant;
 use stresscase_core::criteria::Criterion;
 use stresscase_core::material::Strengths;
 use stresscase_core::points::{measure_all, worst_first, Measure};
 use stresscase_core::StressTensor;
-use stresscase_tests::check::{data_path, target_dir};
+use stresscase_tests::check::target_dir;
 use stresscase_web::formats::table::{read, sniff};
 
 fn main() {
@@ -67,20 +66,7 @@ fn main() {
         worst = (order[0], m[order[0]].von_mises);
     }
 
-    let peer = Command::new(std::env::var("PYTHON").unwrap_or_else(|_| "python3".into()))
-        .arg(data_path("peers/pandas_table.py"))
-        .arg(&path)
-        .env("OMP_NUM_THREADS", "1")
-        .env("OPENBLAS_NUM_THREADS", "1")
-        .output()
-        .expect("python3 with pandas and numpy");
-    assert!(
-        peer.status.success(),
-        "peer failed: {}",
-        String::from_utf8_lossy(&peer.stderr)
-    );
-    let info: serde_json::Value =
-        serde_json::from_slice(peer.stdout.trim_ascii()).expect("peer JSON");
+    let info = stresscase_tests::peers::pandas_table(&path);
     let peer_s = info["seconds"].as_f64().expect("seconds");
     println!("{rows} rows × 6 components ({mb:.1} MB CSV): file text → read, measured, ranked; best of {reps}");
     println!("{:<46} {:>9} {:>12}", "", "seconds", "worst row");

@@ -4,4 +4,5 @@
 pub mod browser;
 pub mod check;
 pub mod page;
+pub mod peers;
 pub mod serve;

@@ -531,6 +531,74 @@ pub fn line_ends(bytes: &[u8]) -> usize {
     lf + lone_cr
 }
 
+/// Reads a table a piece at a time ([`pieces`]): each [`PieceReader::step`] reads one piece
+/// and appends it, so a caller can hand control back between pieces.
+pub struct PieceReader<'a> {
+    body: &'a str,
+    shape: Shape,
+    label: Option<usize>,
+    starts: Vec<usize>,
+    next: usize,
+    lines_before: usize,
+    table: Table,
+}
+
+impl<'a> PieceReader<'a> {
+    /// Ready to read `text` in `shape` in pieces of about `bytes`.
+    #[must_use]
+    pub fn new(text: &'a str, shape: &Shape, label: Option<usize>, bytes: usize) -> Self {
+        let body = strip_bom(text);
+        Self {
+            body,
+            shape: shape.clone(),
+            label,
+            starts: pieces(body, bytes),
+            next: 0,
+            lines_before: 0,
+            table: Table {
+                columns: shape.columns,
+                ..Table::default()
+            },
+        }
+    }
+
+    /// How many pieces the text is cut into.
+    #[must_use]
+    pub fn pieces(&self) -> usize {
+        self.starts.len()
+    }
+
+    /// Reads the next piece; the fraction of the text read so far, or `None` when all is read.
+    pub fn step(&mut self) -> Option<f64> {
+        let &s = self.starts.get(self.next)?;
+        let end = self
+            .starts
+            .get(self.next + 1)
+            .copied()
+            .unwrap_or(self.body.len());
+        let shape = Shape {
+            header: if self.next == 0 {
+                self.shape.header.clone()
+            } else {
+                None
+            },
+            ..self.shape.clone()
+        };
+        let piece = &self.body[s..end];
+        self.table
+            .append(read(piece, &shape, self.label), self.lines_before);
+        self.lines_before += line_ends(piece.as_bytes());
+        self.next += 1;
+        Some(end as f64 / self.body.len().max(1) as f64)
+    }
+
+    /// The table read so far.
+    #[must_use]
+    pub fn finish(self) -> Table {
+        self.table
+    }
+}
+
 impl Table {
     /// Appends the rows of `next`, a table read from a later piece of the same text whose
     /// first line is line `lines_before + 1` of the whole.
@@ -604,17 +672,7 @@ pub fn write_results(
             rec.push(t.label(i).unwrap_or_default().to_string());
         }
         rec.extend(t.row(i).iter().map(|&v| num(v)));
-        rec.extend(
-            [
-                m.principal[0],
-                m.principal[1],
-                m.principal[2],
-                m.tau_max,
-                m.von_mises,
-                m.tresca,
-            ]
-            .map(num),
-        );
+        rec.extend(m.stresses().map(num));
         rec.push(num(m.triaxiality));
         rec.push(num(m.factor));
         let _ = w.write_record(&rec);

@@ -4,9 +4,7 @@
 //! in this browser tab: it is not in the case link.
 
 use crate::edge::browser;
-use crate::formats::table::{
-    guess_kinds, line_ends, pieces, read, sniff, write_results, Shape, Table,
-};
+use crate::formats::table::{guess_kinds, read, sniff, write_results, PieceReader, Shape, Table};
 use crate::model::case::{Case, CaseForm, Field, Mode};
 use crate::model::choices::Source;
 use crate::model::evaluation::Evaluation;
@@ -192,29 +190,18 @@ async fn load_in_pieces(
     let shape = sniff(&text).map_err(|e| e.to_string())?;
     let kinds = guess_kinds(&shape);
     let label = kinds.iter().position(|k| *k == ColumnKind::Label);
-    let body = text.strip_prefix('\u{feff}').unwrap_or(&text);
-    let starts = pieces(body, PIECE);
-    let mut table = Table {
-        columns: shape.columns,
-        ..Table::default()
-    };
-    let mut lines_before = 0;
-    for (k, &s) in starts.iter().enumerate() {
-        let end = starts.get(k + 1).copied().unwrap_or(body.len());
-        let piece_shape = Shape {
-            header: if k == 0 { shape.header.clone() } else { None },
-            ..shape.clone()
-        };
-        table.append(read(&body[s..end], &piece_shape, label), lines_before);
-        lines_before += line_ends(&body.as_bytes()[s..end]);
-        if starts.len() > 1 {
-            progress.set(Some(end as f64 / body.len().max(1) as f64));
+    let mut reader = PieceReader::new(&text, &shape, label, PIECE);
+    let many = reader.pieces() > 1;
+    while let Some(f) = reader.step() {
+        if many {
+            progress.set(Some(f));
             browser::yield_to_browser().await;
             if cancelled() {
                 return Ok(None);
             }
         }
     }
+    let table = reader.finish();
     Ok(Some(Loaded {
         from,
         shape,

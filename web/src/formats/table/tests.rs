@@ -181,23 +181,15 @@ fn a_table_read_in_pieces_is_the_table_read_whole() {
     }
     let shape = sniff(&text).unwrap();
     let whole = read(&text, &shape, Some(0));
-    let text = text.trim_start_matches('\u{feff}');
-    let starts = pieces(text, 4096);
-    assert!(starts.len() > 5, "{}", starts.len());
-    let mut t = Table {
-        columns: shape.columns,
-        ..Table::default()
-    };
-    let mut lines_before = 0;
-    for (k, &s) in starts.iter().enumerate() {
-        let end = starts.get(k + 1).copied().unwrap_or(text.len());
-        let piece_shape = Shape {
-            header: if k == 0 { shape.header.clone() } else { None },
-            ..shape.clone()
-        };
-        t.append(read(&text[s..end], &piece_shape, Some(0)), lines_before);
-        lines_before += line_ends(&text.as_bytes()[s..end]);
+    let mut reader = PieceReader::new(&text, &shape, Some(0), 4096);
+    assert!(reader.pieces() > 5, "{}", reader.pieces());
+    let mut last = 0.0;
+    while let Some(f) = reader.step() {
+        assert!(f > last && f <= 1.0);
+        last = f;
     }
+    assert_eq!(last, 1.0);
+    let t = reader.finish();
     // Compared field by field (the label column holds NaN, which equals nothing).
     let bits = |t: &Table| t.values.iter().map(|v| v.to_bits()).collect::<Vec<_>>();
     assert!(bits(&t) == bits(&whole), "values differ");
