@@ -12,9 +12,13 @@
 
 use core::fmt;
 
+mod export;
 mod kinds;
+mod pieces;
 
+pub use export::write_results;
 pub use kinds::{guess_kind, guess_kinds};
+pub use pieces::{line_ends, pieces, PieceReader};
 
 /// How the cells of a line are separated.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -494,191 +498,6 @@ impl<'a> LineIndex<'a> {
         }
         self.at + 1
     }
-}
-
-/// Where to cut `text` into pieces of about `bytes` each, for reading a large table a piece at
-/// a time (between pieces the page hands control back to the browser): the byte offsets of the
-/// pieces' starts, each just after a line feed. A text with a quote character is not cut (a
-/// quoted cell may span lines), nor is one shorter than two pieces.
-#[must_use]
-pub fn pieces(text: &str, bytes: usize) -> Vec<usize> {
-    let b = text.as_bytes();
-    let mut starts = vec![0];
-    if b.contains(&b'"') || b.len() < 2 * bytes.max(1) {
-        return starts;
-    }
-    let mut at = bytes.max(1);
-    while at < b.len() {
-        match memchr::memchr(b'\n', &b[at..]) {
-            Some(i) if at + i + 1 < b.len() => {
-                starts.push(at + i + 1);
-                at += i + 1 + bytes;
-            }
-            _ => break,
-        }
-    }
-    starts
-}
-
-/// Line ends in `bytes` (`\n`, `\r\n` or a lone `\r`, each once): the lines a piece of text
-/// that ends just after a line feed adds.
-#[must_use]
-pub fn line_ends(bytes: &[u8]) -> usize {
-    let lf = memchr::memchr_iter(b'\n', bytes).count();
-    let lone_cr = memchr::memchr_iter(b'\r', bytes)
-        .filter(|&i| bytes.get(i + 1) != Some(&b'\n'))
-        .count();
-    lf + lone_cr
-}
-
-/// Reads a table a piece at a time ([`pieces`]): each [`PieceReader::step`] reads one piece
-/// and appends it, so a caller can hand control back between pieces.
-pub struct PieceReader<'a> {
-    body: &'a str,
-    shape: Shape,
-    label: Option<usize>,
-    starts: Vec<usize>,
-    next: usize,
-    lines_before: usize,
-    table: Table,
-}
-
-impl<'a> PieceReader<'a> {
-    /// Ready to read `text` in `shape` in pieces of about `bytes`.
-    #[must_use]
-    pub fn new(text: &'a str, shape: &Shape, label: Option<usize>, bytes: usize) -> Self {
-        let body = strip_bom(text);
-        Self {
-            body,
-            shape: shape.clone(),
-            label,
-            starts: pieces(body, bytes),
-            next: 0,
-            lines_before: 0,
-            table: Table {
-                columns: shape.columns,
-                ..Table::default()
-            },
-        }
-    }
-
-    /// How many pieces the text is cut into.
-    #[must_use]
-    pub fn pieces(&self) -> usize {
-        self.starts.len()
-    }
-
-    /// Reads the next piece; the fraction of the text read so far, or `None` when all is read.
-    pub fn step(&mut self) -> Option<f64> {
-        let &s = self.starts.get(self.next)?;
-        let end = self
-            .starts
-            .get(self.next + 1)
-            .copied()
-            .unwrap_or(self.body.len());
-        let shape = Shape {
-            header: if self.next == 0 {
-                self.shape.header.clone()
-            } else {
-                None
-            },
-            ..self.shape.clone()
-        };
-        let piece = &self.body[s..end];
-        self.table
-            .append(read(piece, &shape, self.label), self.lines_before);
-        self.lines_before += line_ends(piece.as_bytes());
-        self.next += 1;
-        Some(end as f64 / self.body.len().max(1) as f64)
-    }
-
-    /// The table read so far.
-    #[must_use]
-    pub fn finish(self) -> Table {
-        self.table
-    }
-}
-
-impl Table {
-    /// Appends the rows of `next`, a table read from a later piece of the same text whose
-    /// first line is line `lines_before + 1` of the whole.
-    pub fn append(&mut self, next: Table, lines_before: usize) {
-        let shift = u32::try_from(lines_before).unwrap_or(u32::MAX);
-        self.values.extend_from_slice(&next.values);
-        self.lines
-            .extend(next.lines.iter().map(|l| l.saturating_add(shift)));
-        let text_shift = u32::try_from(self.label_text.len()).unwrap_or(u32::MAX);
-        self.label_text.push_str(&next.label_text);
-        self.label_ends
-            .extend(next.label_ends.iter().map(|e| e.saturating_add(text_shift)));
-        for mut r in next.refused {
-            if self.refused.len() < KEEP_REFUSALS {
-                r.line += lines_before;
-                self.refused.push(r);
-            }
-        }
-        self.refused_count += next.refused_count;
-    }
-}
-
-/// The computed rows as CSV: a comment line saying where they come from, a header, then one
-/// record per row in `order` (indices into `out`): the file line, the label (when there is
-/// one), the row's own numbers, then σ1, σ2, σ3, τmax, von Mises, Tresca (in `unit`),
-/// triaxiality and the factor of safety. Numbers are written in full (shortest round-trip
-/// form); an undefined one is left empty.
-#[must_use]
-pub fn write_results(
-    t: &Table,
-    names: &[String],
-    out: &crate::model::table::TableOutcome,
-    order: &[usize],
-    unit: &str,
-    from: &str,
-) -> String {
-    let mut w = csv::WriterBuilder::new().from_writer(Vec::new());
-    let num = |v: f64| {
-        if v.is_finite() {
-            crate::model::numfmt::write_number(v)
-        } else if v == f64::INFINITY {
-            "inf".to_string()
-        } else {
-            String::new()
-        }
-    };
-    let mut header = vec!["line".to_string()];
-    let labelled = !t.label_ends.is_empty();
-    if labelled {
-        header.push("label".into());
-    }
-    header.extend(names.iter().cloned());
-    for h in [
-        "sigma1",
-        "sigma2",
-        "sigma3",
-        "tau_max",
-        "von_mises",
-        "tresca",
-    ] {
-        header.push(format!("{h} [{unit}]"));
-    }
-    header.push("triaxiality".into());
-    header.push("factor_of_safety".into());
-    let _ = w.write_record(&header);
-    for &k in order {
-        let Some(&i) = out.rows.get(k) else { continue };
-        let m = &out.measures[k];
-        let mut rec = vec![t.lines[i].to_string()];
-        if labelled {
-            rec.push(t.label(i).unwrap_or_default().to_string());
-        }
-        rec.extend(t.row(i).iter().map(|&v| num(v)));
-        rec.extend(m.stresses().map(num));
-        rec.push(num(m.triaxiality));
-        rec.push(num(m.factor));
-        let _ = w.write_record(&rec);
-    }
-    let body = String::from_utf8(w.into_inner().unwrap_or_default()).unwrap_or_default();
-    format!("# Stresscase: rows of {from}, computed with the case on screen\n{body}")
 }
 
 #[cfg(test)]
