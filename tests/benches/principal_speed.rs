@@ -8,11 +8,10 @@
 
 use rand::{Rng, SeedableRng};
 use std::hint::black_box;
-use std::process::Command;
 use std::time::Instant;
 use stresscase_core::principal::{principal_values_into, Principal};
 use stresscase_core::StressTensor;
-use stresscase_tests::check::{data_path, target_dir};
+use stresscase_tests::check::target_dir;
 
 fn best_of<F: FnMut()>(reps: usize, mut f: F) -> f64 {
     (0..reps)
@@ -48,22 +47,7 @@ fn main() {
         .collect();
     std::fs::write(&input, bytes).expect("write tensors");
 
-    let peer = Command::new(std::env::var("PYTHON").unwrap_or_else(|_| "python3".into()))
-        .arg(data_path("peers/numpy_eigvalsh.py"))
-        .arg(&input)
-        .arg(&output)
-        .env("OMP_NUM_THREADS", "1")
-        .env("OPENBLAS_NUM_THREADS", "1")
-        .env("MKL_NUM_THREADS", "1")
-        .output()
-        .expect("run python3 (numpy peer)");
-    assert!(
-        peer.status.success(),
-        "numpy peer failed: {}",
-        String::from_utf8_lossy(&peer.stderr)
-    );
-    let line = String::from_utf8_lossy(&peer.stdout);
-    let info: serde_json::Value = serde_json::from_str(line.trim()).expect("peer JSON");
+    let info = stresscase_tests::peers::run("numpy_eigvalsh.py", &[&input, &output]);
     let numpy_ns = info["ns_per_tensor"].as_f64().expect("ns_per_tensor");
     let numpy_vals: Vec<f64> = std::fs::read(&output)
         .expect("peer output")

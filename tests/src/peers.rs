@@ -4,24 +4,32 @@ use crate::check::data_path;
 use std::path::Path;
 use std::process::Command;
 
-/// Runs `peers/pandas_table.py` (`pandas.read_csv` + numpy, single-threaded) on a table file
-/// and returns its JSON line: best seconds, rows, and the worst row with its von Mises.
+/// Runs `peers/<script>` single-threaded (OMP, OpenBLAS and MKL held to one thread) with
+/// `args`, and returns the JSON line it prints.
 ///
 /// # Panics
-/// When python3, pandas or numpy is missing, or the peer fails.
+/// When python3 or the peer's modules are missing, or the peer fails.
 #[must_use]
-pub fn pandas_table(path: &Path) -> serde_json::Value {
+pub fn run(script: &str, args: &[&Path]) -> serde_json::Value {
     let peer = Command::new(std::env::var("PYTHON").unwrap_or_else(|_| "python3".into()))
-        .arg(data_path("peers/pandas_table.py"))
-        .arg(path)
+        .arg(data_path(&format!("peers/{script}")))
+        .args(args)
         .env("OMP_NUM_THREADS", "1")
         .env("OPENBLAS_NUM_THREADS", "1")
+        .env("MKL_NUM_THREADS", "1")
         .output()
-        .expect("python3 with pandas and numpy");
+        .expect("run python3 (peer)");
     assert!(
         peer.status.success(),
-        "peer failed: {}",
+        "{script} failed: {}",
         String::from_utf8_lossy(&peer.stderr)
     );
     serde_json::from_slice(peer.stdout.trim_ascii()).expect("peer JSON")
+}
+
+/// `peers/pandas_table.py` (`pandas.read_csv` + numpy) on a table file: best seconds, rows,
+/// and the worst row with its von Mises.
+#[must_use]
+pub fn pandas_table(path: &Path) -> serde_json::Value {
+    run("pandas_table.py", &[path])
 }
