@@ -445,6 +445,13 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
         outcome.with(|o| {
             let Some(Ok(o)) = o else { return None };
             let order = worst_first(&o.measures, by);
+            // The label column's own name ("node", "point", ...), as the file has it.
+            let label_name = l
+                .kinds
+                .iter()
+                .position(|k| *k == ColumnKind::Label)
+                .and_then(|j| l.shape.header.as_ref()?.get(j).cloned())
+                .unwrap_or_else(|| "id".into());
             let items = order
                 .into_iter()
                 .take(TOP)
@@ -454,7 +461,11 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
                     let m = &o.measures[k];
                     let value = by.of(m);
                     let line = l.table.lines[i];
-                    let id = l.table.label(i).map(|s| format!(" ({s})")).unwrap_or_default();
+                    let id = l
+                        .table
+                        .label(i)
+                        .map(|s| format!(", {label_name} {s}"))
+                        .unwrap_or_default();
                     let text = format!(
                         "line {line}{id}: n = {}, σvm = {} {}, σ1 = {} {}",
                         format_sig(m.factor, 3),
@@ -476,7 +487,21 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
                     }
                 })
                 .collect_view();
-            Some(view! { <ol id="table-top" class="table-top">{items}</ol> })
+            let basis = shown.with_untracked(|e| {
+                e.as_ref().map(|e| {
+                    format!(
+                        "Worst rows by {}. n is the static factor of safety by {} for {} (the case's material and criterion in use); stresses in {}, in the case's axes.",
+                        measure_name(by),
+                        e.judgement.in_use.name(),
+                        e.judgement.name,
+                        u.symbol()
+                    )
+                })
+            });
+            Some(view! {
+                <p class="hint" id="table-basis">{basis}</p>
+                <ol id="table-top" class="table-top">{items}</ol>
+            })
         })
     };
 
