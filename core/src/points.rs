@@ -102,6 +102,78 @@ impl Measure {
     }
 }
 
+/// The allowable value of a measure: where the criterion in use reaches the required factor of
+/// safety `required`, when that criterion limits this measure on its own (a line a plot of the
+/// measure can draw). Same unit as `strengths`. From the criteria's failure functions
+/// ([`crate::criteria::failure_index`]; the limits are as in Shigley ch. 5, from memory):
+/// - factor of safety: `required`;
+/// - von Mises under von Mises: Sy/n; Tresca intensity under Tresca: Sy/n, and τmax under
+///   Tresca: Sy/(2n);
+/// - σ1 under maximum normal stress: Sut/n; σ3: −Suc/n (Suc = Sut when none is given).
+///
+/// `None` where the criterion does not limit the measure alone (σ1 under Coulomb–Mohr depends
+/// on σ3 too, say), or it needs a yield strength the material lacks.
+#[must_use]
+pub fn allowable(
+    measure: Measure,
+    criterion: Criterion,
+    strengths: &Strengths,
+    required: f64,
+) -> Option<f64> {
+    if !(required.is_finite() && required > 0.0) {
+        return None;
+    }
+    let sy = strengths.yield_strength();
+    let sut = strengths.ultimate_tensile();
+    let suc = strengths.ultimate_compressive().unwrap_or(sut);
+    match (measure, criterion) {
+        (Measure::Factor, _) => Some(required),
+        (Measure::VonMises, Criterion::VonMises) | (Measure::Tresca, Criterion::Tresca) => {
+            sy.map(|sy| sy / required)
+        }
+        (Measure::TauMax, Criterion::Tresca) => sy.map(|sy| 0.5 * sy / required),
+        (Measure::Sigma1, Criterion::MaxNormal) => Some(sut / required),
+        (Measure::Sigma3, Criterion::MaxNormal) => Some(-suc / required),
+        _ => None,
+    }
+}
+
+/// Indices of the `k` worst of `measures` by `by`, worst first: the first `k` of
+/// [`worst_first`], found without sorting every point (a selection, then a sort of `k`).
+#[must_use]
+pub fn worst_few(measures: &[PointMeasures], by: Measure, k: usize) -> Vec<usize> {
+    let mut keyed = keyed(measures, by);
+    let k = k.min(keyed.len());
+    if k == 0 {
+        return Vec::new();
+    }
+    if k < keyed.len() {
+        keyed.select_nth_unstable_by(k - 1, compare_keyed);
+        keyed.truncate(k);
+    }
+    keyed.sort_unstable_by(compare_keyed);
+    keyed.into_iter().map(|(_, _, i)| i).collect()
+}
+
+/// (NaN?, key growing with badness reversed, index): the ranking order of [`worst_first`].
+fn keyed(measures: &[PointMeasures], by: Measure) -> Vec<(bool, f64, usize)> {
+    let sign = if by.lower_is_worse() { 1.0 } else { -1.0 };
+    measures
+        .iter()
+        .enumerate()
+        .map(|(i, m)| {
+            let v = by.of(m);
+            (v.is_nan(), if v.is_nan() { 0.0 } else { sign * v + 0.0 }, i)
+        })
+        .collect()
+}
+
+fn compare_keyed(a: &(bool, f64, usize), b: &(bool, f64, usize)) -> core::cmp::Ordering {
+    a.0.cmp(&b.0)
+        .then_with(|| a.1.total_cmp(&b.1))
+        .then_with(|| a.2.cmp(&b.2))
+}
+
 /// The measures of every tensor (same unit as `strengths`), judged with `criterion`.
 ///
 /// # Errors
@@ -154,20 +226,8 @@ fn measure_one(
 pub fn worst_first(measures: &[PointMeasures], by: Measure) -> Vec<usize> {
     // Sort (NaN?, key, index) triples held together: a cheap comparison on contiguous data,
     // and the index makes the unstable sort give the stable order.
-    let sign = if by.lower_is_worse() { 1.0 } else { -1.0 };
-    let mut keyed: Vec<(bool, f64, usize)> = measures
-        .iter()
-        .enumerate()
-        .map(|(i, m)| {
-            let v = by.of(m);
-            (v.is_nan(), if v.is_nan() { 0.0 } else { sign * v + 0.0 }, i)
-        })
-        .collect();
-    keyed.sort_unstable_by(|a, b| {
-        a.0.cmp(&b.0)
-            .then_with(|| a.1.total_cmp(&b.1))
-            .then_with(|| a.2.cmp(&b.2))
-    });
+    let mut keyed = keyed(measures, by);
+    keyed.sort_unstable_by(compare_keyed);
     keyed.into_iter().map(|(_, _, i)| i).collect()
 }
 
@@ -203,6 +263,105 @@ mod tests {
                 prop_assert!((r.factor * r.von_mises - 250.0).abs() <= 1e-9 * 250.0);
             }
         }
+    }
+
+    proptest! {
+        #[test]
+        fn the_few_worst_are_the_first_of_the_ranking(
+            sx in proptest::collection::vec(prop_oneof![-3i32..3, Just(0)], 0..40),
+            k in 0usize..45,
+        ) {
+            // Small integers: many ties, which must keep file order in both.
+            let rows: Vec<StressTensor> = sx
+                .iter()
+                .map(|&v| StressTensor::plane(f64::from(v) * 50.0, 0.0, 0.0).unwrap())
+                .collect();
+            let iron = Strengths::try_new(None, 200.0, None, 0.5, None).unwrap();
+            for s in [steel(), iron] {
+                let m = measure_all(&rows, Criterion::VonMises, &s).unwrap();
+                for by in Measure::ALL {
+                    let all = worst_first(&m, by);
+                    prop_assert_eq!(worst_few(&m, by, k), all[..k.min(all.len())].to_vec());
+                }
+            }
+        }
+
+        #[test]
+        fn a_state_at_the_allowable_has_the_required_factor(
+            c in proptest::array::uniform6(-500.0f64..500.0),
+            required in 1.0f64..4.0,
+        ) {
+            // Scale the state so its measure sits on the allowable: n must then be `required`.
+            let t = StressTensor::new(c[0], c[1], c[2], c[3], c[4], c[5]).unwrap();
+            let iron = Strengths::try_new(None, 200.0, Some(700.0), 0.5, None).unwrap();
+            for (s, criteria) in [
+                (steel(), &[Criterion::VonMises, Criterion::Tresca][..]),
+                (iron, &[Criterion::MaxNormal][..]),
+            ] {
+                for &criterion in criteria {
+                    for by in Measure::ALL {
+                        let Some(a) = allowable(by, criterion, &s, required) else { continue };
+                        let m = measure_all(&[t], criterion, &s).unwrap()[0];
+                        if by == Measure::Factor {
+                            prop_assert_eq!(a, required);
+                            continue;
+                        }
+                        let v = by.of(&m);
+                        // Only where this measure is the one that governs the criterion.
+                        let k = a / v;
+                        if !(k.is_finite() && k > 0.0) { continue; }
+                        let Ok(ts) = t.scaled(k) else { continue };
+                        let scaled = measure_all(&[ts], criterion, &s).unwrap()[0];
+                        if criterion == Criterion::MaxNormal {
+                            let other = if by == Measure::Sigma1 { Measure::Sigma3 } else { Measure::Sigma1 };
+                            let o = other.of(&scaled);
+                            let oa = allowable(other, criterion, &s, required).unwrap();
+                            if (other == Measure::Sigma1 && o > oa) || (other == Measure::Sigma3 && o < oa) { continue; }
+                        }
+                        prop_assert!((scaled.factor - required).abs() <= 1e-9 * required,
+                            "{by:?} {criterion:?}: n = {}", scaled.factor);
+                    }
+                }
+            }
+        }
+    }
+
+    #[test]
+    fn measures_without_a_limit_of_their_own_have_no_allowable() {
+        let s = steel();
+        assert_eq!(
+            allowable(Measure::VonMises, Criterion::VonMises, &s, 2.0),
+            Some(125.0)
+        );
+        assert_eq!(
+            allowable(Measure::TauMax, Criterion::Tresca, &s, 2.0),
+            Some(62.5)
+        );
+        assert_eq!(
+            allowable(Measure::Triaxiality, Criterion::VonMises, &s, 2.0),
+            None
+        );
+        assert_eq!(
+            allowable(Measure::Tresca, Criterion::VonMises, &s, 2.0),
+            None
+        );
+        assert_eq!(
+            allowable(Measure::Sigma1, Criterion::CoulombMohr, &s, 2.0),
+            None
+        );
+        assert_eq!(
+            allowable(Measure::Factor, Criterion::CoulombMohr, &s, 0.0),
+            None
+        );
+        let iron = Strengths::try_new(None, 200.0, None, 0.5, None).unwrap();
+        assert_eq!(
+            allowable(Measure::VonMises, Criterion::VonMises, &iron, 2.0),
+            None
+        );
+        assert_eq!(
+            allowable(Measure::Sigma3, Criterion::MaxNormal, &iron, 2.0),
+            Some(-100.0)
+        );
     }
 
     #[test]
