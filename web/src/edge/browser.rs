@@ -305,6 +305,44 @@ pub async fn read_chosen_file(
         .ok_or_else(|| "the file is not text".into())
 }
 
+/// The file chosen in a file input, with its name and size in bytes.
+pub fn chosen_file(input: &web_sys::HtmlInputElement) -> Option<(web_sys::File, String, f64)> {
+    let f = input.files()?.get(0)?;
+    let (name, size) = (f.name(), f.size());
+    Some((f, name, size))
+}
+
+/// Bytes `start..end` of a file, as they are (no text decoding, so a large file is never held
+/// whole as text). Reading starts at once; await [`FileSlice::bytes`] for them, and do other
+/// work meanwhile.
+pub fn start_file_slice(file: &web_sys::File, start: f64, end: f64) -> Result<FileSlice, String> {
+    let blob = file
+        .slice_with_f64_and_f64(start, end)
+        .map_err(|e| describe(&e))?;
+    Ok(FileSlice(wasm_bindgen_futures::JsFuture::from(
+        blob.array_buffer(),
+    )))
+}
+
+/// A slice of a file being read ([`start_file_slice`]).
+pub struct FileSlice(wasm_bindgen_futures::JsFuture);
+
+impl FileSlice {
+    /// The slice's bytes, copied into the page's memory once they are read.
+    pub async fn bytes(self) -> Result<Vec<u8>, String> {
+        let buffer = self.0.await.map_err(|e| describe(&e))?;
+        Ok(js_sys::Uint8Array::new(&buffer).to_vec())
+    }
+}
+
+/// Marks a moment on the page's performance timeline (`performance.mark`), for benchmarks that
+/// time the page's own steps; nothing when there is no timeline.
+pub fn mark(name: &str) {
+    if let Some(p) = web_sys::window().and_then(|w| w.performance()) {
+        let _ = p.mark(name);
+    }
+}
+
 /// Scrolls the element `#id` into view and moves the keyboard focus to it (when it can take
 /// focus); nothing when there is no such element.
 pub fn show_element(id: &str) {

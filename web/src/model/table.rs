@@ -8,6 +8,8 @@
 //! A row whose numbers the path refuses (a rosette reduction that overflows, say) is refused
 //! with the reason; the whole table is refused when its columns do not make one kind of state.
 
+pub mod picture;
+
 use crate::model::case::Case;
 use crate::model::choices::{Choices, Condition, Layout, Source};
 use crate::model::inputs::Num;
@@ -121,16 +123,46 @@ pub fn evaluate(
     case: &Case,
     judgement: &Judgement,
 ) -> Result<TableOutcome, TableProblem> {
-    let state = row_state(kinds, unit)?;
-    let rows = values.len().checked_div(columns).unwrap_or(0);
-    let row = |i: usize| &values[i * columns..(i + 1) * columns];
     let mut out = TableOutcome::default();
+    let rows = values.len().checked_div(columns).unwrap_or(0);
+    evaluate_rows(
+        values,
+        columns,
+        kinds,
+        unit,
+        (case, judgement),
+        0..rows,
+        &mut out,
+    )?;
+    Ok(out)
+}
+
+/// [`evaluate`] for the rows in `range` only, appended to `out` (the page computes a large
+/// table a chunk at a time, handing control back to the browser between chunks).
+///
+/// # Errors
+/// As [`evaluate`]; `out` is then left as it was.
+pub fn evaluate_rows(
+    values: &[f64],
+    columns: usize,
+    kinds: &[ColumnKind],
+    unit: StressUnit,
+    (case, judgement): (&Case, &Judgement),
+    range: core::ops::Range<usize>,
+    out: &mut TableOutcome,
+) -> Result<(), TableProblem> {
+    let state = row_state(kinds, unit)?;
+    let row = |i: usize| &values[i * columns..(i + 1) * columns];
+    let first_new = out.tensors.len();
+    let refused_before = out.refused.len();
     match state {
         RowState::Stress(from) => {
             let col: [Option<usize>; 6] =
                 core::array::from_fn(|k| column_of(kinds, ColumnKind::Stress(k as u8)));
             let k = from.convert(1.0, case.unit);
-            for i in 0..rows {
+            out.rows.reserve(range.len());
+            out.tensors.reserve(range.len());
+            for i in range {
                 let r = row(i);
                 let c: [f64; 6] = core::array::from_fn(|j| col[j].map_or(0.0, |c| r[c] * k));
                 match StressTensor::new(c[0], c[1], c[2], c[3], c[4], c[5]) {
@@ -144,7 +176,7 @@ pub fn evaluate(
         }
         RowState::Rosette | RowState::Strain => {
             let (choices, nums) = path_numbers(state, kinds, &case.choices)?;
-            for i in 0..rows {
+            for i in range {
                 let r = row(i);
                 let own = nums.iter().map(|&(n, c)| (n, r[c])).collect();
                 let n = RowNumbers { case, own };
@@ -159,9 +191,22 @@ pub fn evaluate(
             }
         }
     }
-    out.measures = measure_all(&out.tensors, judgement.in_use, &judgement.strengths)
-        .map_err(|e| TableProblem(e.to_string()))?;
-    Ok(out)
+    match measure_all(
+        &out.tensors[first_new..],
+        judgement.in_use,
+        &judgement.strengths,
+    ) {
+        Ok(m) => {
+            out.measures.extend(m);
+            Ok(())
+        }
+        Err(e) => {
+            out.rows.truncate(first_new);
+            out.tensors.truncate(first_new);
+            out.refused.truncate(refused_before);
+            Err(TableProblem(e.to_string()))
+        }
+    }
 }
 
 /// The choices a rosette or strain row is evaluated with, and which column feeds which number.
@@ -286,6 +331,42 @@ mod tests {
         )
         .unwrap_err();
         assert!(p.0.contains("εy"), "{}", p.0);
+    }
+
+    #[test]
+    fn rows_computed_in_chunks_are_the_rows_computed_at_once() {
+        let mut f = CaseForm::demo();
+        f.choices.source = Source::Rosette;
+        let (c, e) = case_of(&f);
+        // Time and three gauges; every fifth row overflows the rosette reduction.
+        let values: Vec<f64> = (0..40)
+            .flat_map(|i| {
+                let g = if i % 5 == 4 {
+                    1e306
+                } else {
+                    f64::from(i) * 10.0
+                };
+                [f64::from(i), 640.0 - g, 215.0, g]
+            })
+            .collect();
+        let kinds = [ColumnKind::Time, Gauge(0), Gauge(1), Gauge(2)];
+        let whole = evaluate(&values, 4, &kinds, StressUnit::MPa, &c, &e.judgement).unwrap();
+        assert_eq!((whole.rows.len(), whole.refused.len()), (32, 8));
+        let mut out = TableOutcome::default();
+        for start in (0..40).step_by(7) {
+            let range = start..(start + 7).min(40);
+            evaluate_rows(
+                &values,
+                4,
+                &kinds,
+                StressUnit::MPa,
+                (&c, &e.judgement),
+                range,
+                &mut out,
+            )
+            .unwrap();
+        }
+        assert_eq!(out, whole);
     }
 
     #[test]

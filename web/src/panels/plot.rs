@@ -1,5 +1,8 @@
 //! Mapping stresses to drawing coordinates: an equal-scale viewport that fits any magnitude, and
-//! "nice" tick values (1, 2 or 5 times a power of ten). Presentation only; no stress formula.
+//! "nice" tick values (1, 2 or 5 times a power of ten) and their labels. Presentation only; no
+//! stress formula.
+
+use crate::model::numfmt::format_sig;
 
 /// A rectangle of the drawing reserved for the plot, in pixels.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -115,9 +118,56 @@ pub fn nice_ticks(lo: f64, hi: f64, max_count: usize) -> Vec<f64> {
         .collect()
 }
 
+/// Labels for ticks from [`nice_ticks`], all with the same number of decimals (enough for the
+/// step), so an axis reads 50, 100, 150 or 0.25, 0.50, 0.75; far from 1 they are written with
+/// three significant digits and a power of ten.
+#[must_use]
+pub fn tick_labels(ticks: &[f64]) -> Vec<String> {
+    let step = match ticks {
+        [a, b, ..] => (b - a).abs(),
+        _ => return ticks.iter().map(|&v| format_sig(v, 3)).collect(),
+    };
+    let biggest = ticks.iter().fold(0.0_f64, |m, v| m.max(v.abs()));
+    if !(1e-4..1e7).contains(&step) || biggest >= 1e7 {
+        return ticks.iter().map(|&v| format_sig(v, 3)).collect();
+    }
+    // Decimals to show the step: 0 for steps of 1 or more, 1 for 0.5 or 0.2, 2 for 0.25...
+    let decimals = (0..=6)
+        .find(|&d| {
+            let scaled = step * 10f64.powi(d);
+            (scaled - scaled.round()).abs() < 1e-6 * scaled.max(1.0)
+        })
+        .unwrap_or(6) as usize;
+    ticks
+        .iter()
+        .map(|&v| {
+            let t = format!("{v:.decimals$}");
+            if t.trim_start_matches('-')
+                .chars()
+                .all(|c| c == '0' || c == '.')
+            {
+                t.trim_start_matches('-').to_string()
+            } else {
+                t.replace('-', "−")
+            }
+        })
+        .collect()
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    #[test]
+    fn tick_labels_share_their_decimals() {
+        assert_eq!(tick_labels(&[50.0, 100.0, 150.0]), ["50", "100", "150"]);
+        assert_eq!(tick_labels(&[0.25, 0.5, 0.75]), ["0.25", "0.50", "0.75"]);
+        assert_eq!(tick_labels(&[-0.2, 0.0, 0.2]), ["−0.2", "0.0", "0.2"]);
+        assert_eq!(tick_labels(&[20000.0, 100000.0]), ["20000", "100000"]);
+        assert_eq!(tick_labels(&[7.0]), [format_sig(7.0, 3)]);
+        let huge = tick_labels(&[0.0, 1e150]);
+        assert_eq!(huge[1], format_sig(1e150, 3));
+    }
 
     const F: Frame = Frame {
         left: 50.0,

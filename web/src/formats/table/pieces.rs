@@ -1,32 +1,9 @@
-//! Reading a large table a piece at a time, so the page can hand control back to the browser
-//! between pieces: where to cut the text, how many lines each piece adds, and appending the
-//! pieces' tables into one that equals the table read whole.
+//! Reading a large table a piece at a time, as its bytes arrive (the page reads a file in
+//! slices and hands control back to the browser between them): complete lines are read as
+//! they come, so the file's text is never held whole, and the table read in pieces equals the
+//! table read whole (tested, and fuzzed with random cuts).
 
-use super::{read, strip_bom, Shape, Table, KEEP_REFUSALS};
-
-/// Where to cut `text` into pieces of about `bytes` each, for reading a large table a piece at
-/// a time (between pieces the page hands control back to the browser): the byte offsets of the
-/// pieces' starts, each just after a line feed. A text with a quote character is not cut (a
-/// quoted cell may span lines), nor is one shorter than two pieces.
-#[must_use]
-pub fn pieces(text: &str, bytes: usize) -> Vec<usize> {
-    let b = text.as_bytes();
-    let mut starts = vec![0];
-    if b.contains(&b'"') || b.len() < 2 * bytes.max(1) {
-        return starts;
-    }
-    let mut at = bytes.max(1);
-    while at < b.len() {
-        match memchr::memchr(b'\n', &b[at..]) {
-            Some(i) if at + i + 1 < b.len() => {
-                starts.push(at + i + 1);
-                at += i + 1 + bytes;
-            }
-            _ => break,
-        }
-    }
-    starts
-}
+use super::{read_into, strip_bom_bytes, Separator, Shape, Table, TableError};
 
 /// Line ends in `bytes` (`\n`, `\r\n` or a lone `\r`, each once): the lines a piece of text
 /// that ends just after a line feed adds.
@@ -39,30 +16,40 @@ pub fn line_ends(bytes: &[u8]) -> usize {
     lf + lone_cr
 }
 
-/// Reads a table a piece at a time ([`pieces`]): each [`PieceReader::step`] reads one piece
-/// and appends it, so a caller can hand control back between pieces.
-pub struct PieceReader<'a> {
-    body: &'a str,
+/// Reads a table from its bytes in pieces of any size ([`StreamReader::push`]).
+///
+/// Each push reads the complete lines it makes (up to the last line feed) and keeps the rest
+/// for the next. A quote character in a comma, semicolon or tab table (a quoted cell may span
+/// lines) makes the reader keep everything from the piece it appears in and read that part
+/// whole at [`StreamReader::finish`].
+pub struct StreamReader {
     shape: Shape,
     label: Option<usize>,
-    starts: Vec<usize>,
-    next: usize,
+    /// Bytes not read yet: a partial last line, or everything since a quote was met.
+    carry: Vec<u8>,
+    /// A quote was met: the rest is read whole at the end.
+    whole: bool,
+    /// No bytes read yet (a byte-order mark may still come).
+    at_start: bool,
+    skip_header: bool,
     lines_before: usize,
+    bytes_seen: usize,
     table: Table,
 }
 
-impl<'a> PieceReader<'a> {
-    /// Ready to read `text` in `shape` in pieces of about `bytes`.
+impl StreamReader {
+    /// Ready to read a table in `shape`; `label` is the column read as text, if any.
     #[must_use]
-    pub fn new(text: &'a str, shape: &Shape, label: Option<usize>, bytes: usize) -> Self {
-        let body = strip_bom(text);
+    pub fn new(shape: &Shape, label: Option<usize>) -> Self {
         Self {
-            body,
             shape: shape.clone(),
             label,
-            starts: pieces(body, bytes),
-            next: 0,
+            carry: Vec::new(),
+            whole: false,
+            at_start: true,
+            skip_header: shape.header.is_some(),
             lines_before: 0,
+            bytes_seen: 0,
             table: Table {
                 columns: shape.columns,
                 ..Table::default()
@@ -70,61 +57,70 @@ impl<'a> PieceReader<'a> {
         }
     }
 
-    /// How many pieces the text is cut into.
-    #[must_use]
-    pub fn pieces(&self) -> usize {
-        self.starts.len()
-    }
-
-    /// Reads the next piece; the fraction of the text read so far, or `None` when all is read.
-    pub fn step(&mut self) -> Option<f64> {
-        let &s = self.starts.get(self.next)?;
-        let end = self
-            .starts
-            .get(self.next + 1)
-            .copied()
-            .unwrap_or(self.body.len());
-        let shape = Shape {
-            header: if self.next == 0 {
-                self.shape.header.clone()
-            } else {
-                None
-            },
-            ..self.shape.clone()
-        };
-        let piece = &self.body[s..end];
+    /// Room for about `rows` rows, so the table grows once (an estimate from the file's size).
+    pub fn reserve_rows(&mut self, rows: usize) {
         self.table
-            .append(read(piece, &shape, self.label), self.lines_before);
-        self.lines_before += line_ends(piece.as_bytes());
-        self.next += 1;
-        Some(end as f64 / self.body.len().max(1) as f64)
+            .values
+            .reserve(rows.saturating_mul(self.shape.columns));
+        self.table.lines.reserve(rows);
     }
 
-    /// The table read so far.
-    #[must_use]
-    pub fn finish(self) -> Table {
-        self.table
-    }
-}
-
-impl Table {
-    /// Appends the rows of `next`, a table read from a later piece of the same text whose
-    /// first line is line `lines_before + 1` of the whole.
-    pub fn append(&mut self, next: Table, lines_before: usize) {
-        let shift = u32::try_from(lines_before).unwrap_or(u32::MAX);
-        self.values.extend_from_slice(&next.values);
-        self.lines
-            .extend(next.lines.iter().map(|l| l.saturating_add(shift)));
-        let text_shift = u32::try_from(self.label_text.len()).unwrap_or(u32::MAX);
-        self.label_text.push_str(&next.label_text);
-        self.label_ends
-            .extend(next.label_ends.iter().map(|e| e.saturating_add(text_shift)));
-        for mut r in next.refused {
-            if self.refused.len() < KEEP_REFUSALS {
-                r.line += lines_before;
-                self.refused.push(r);
-            }
+    /// Reads the complete lines `bytes` makes with what was kept from the last push.
+    ///
+    /// # Errors
+    /// [`TableError::Binary`] for a NUL byte: the caller drops the reader (nothing is kept).
+    pub fn push(&mut self, bytes: &[u8]) -> Result<(), TableError> {
+        if memchr::memchr(0, bytes).is_some() {
+            return Err(TableError::Binary);
         }
-        self.refused_count += next.refused_count;
+        self.bytes_seen += bytes.len();
+        self.carry.extend_from_slice(bytes);
+        if !self.whole
+            && self.shape.separator != Separator::Whitespace
+            && memchr::memchr(b'"', bytes).is_some()
+        {
+            self.whole = true;
+        }
+        if self.whole {
+            return Ok(());
+        }
+        let Some(end) = memchr::memrchr(b'\n', &self.carry) else {
+            return Ok(());
+        };
+        let carry = core::mem::take(&mut self.carry);
+        self.read_piece(&carry[..=end]);
+        self.carry = carry[end + 1..].to_vec();
+        Ok(())
+    }
+
+    fn read_piece(&mut self, piece: &[u8]) {
+        let piece = if core::mem::take(&mut self.at_start) {
+            strip_bom_bytes(piece)
+        } else {
+            piece
+        };
+        read_into(
+            &mut self.table,
+            piece,
+            &self.shape,
+            self.label,
+            &mut self.skip_header,
+            self.lines_before,
+        );
+        self.lines_before += line_ends(piece);
+    }
+
+    /// Bytes pushed so far.
+    #[must_use]
+    pub fn bytes_seen(&self) -> usize {
+        self.bytes_seen
+    }
+
+    /// Reads what is left and gives the table.
+    #[must_use]
+    pub fn finish(mut self) -> Table {
+        let carry = core::mem::take(&mut self.carry);
+        self.read_piece(&carry);
+        self.table
     }
 }

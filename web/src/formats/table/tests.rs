@@ -181,22 +181,125 @@ fn a_table_read_in_pieces_is_the_table_read_whole() {
     }
     let shape = sniff(&text).unwrap();
     let whole = read(&text, &shape, Some(0));
-    let mut reader = PieceReader::new(&text, &shape, Some(0), 4096);
-    assert!(reader.pieces() > 5, "{}", reader.pieces());
-    let mut last = 0.0;
-    while let Some(f) = reader.step() {
-        assert!(f > last && f <= 1.0);
-        last = f;
+    assert_eq!((whole.refused_count, whole.rows()), (12, 3000 - 12 - 6)); // 6 comment lines
+    for cut in [1, 2, 3, 7, 4096, 1 << 20] {
+        same_table(&in_pieces(&text, &shape, Some(0), cut), &whole);
     }
-    assert_eq!(last, 1.0);
-    let t = reader.finish();
-    // Compared field by field (the label column holds NaN, which equals nothing).
+}
+
+/// `text` read by a [`StreamReader`] fed `cut` bytes at a time.
+fn in_pieces(text: &str, shape: &Shape, label: Option<usize>, cut: usize) -> Table {
+    let mut reader = StreamReader::new(shape, label);
+    for piece in text.as_bytes().chunks(cut) {
+        reader.push(piece).unwrap();
+    }
+    assert_eq!(reader.bytes_seen(), text.len());
+    reader.finish()
+}
+
+/// Field by field (the label column holds NaN, which equals nothing).
+fn same_table(t: &Table, whole: &Table) {
     let bits = |t: &Table| t.values.iter().map(|v| v.to_bits()).collect::<Vec<_>>();
-    assert!(bits(&t) == bits(&whole), "values differ");
+    assert!(bits(t) == bits(whole), "values differ");
     assert!(t.lines == whole.lines, "lines differ");
     assert!(t.label_text == whole.label_text && t.label_ends == whole.label_ends);
-    assert!(t.refused == whole.refused, "{:?}", &t.refused[..2]);
-    assert_eq!((t.refused_count, whole.refused_count), (12, 12));
-    assert_eq!(t.rows(), 3000 - 12 - 6); // 12 refused, 6 comment lines in place of rows
-    assert_eq!(pieces("a,\"b\"\n1,2\n", 1), vec![0]);
+    assert!(
+        t.refused == whole.refused,
+        "{:?} {:?}",
+        t.refused,
+        whole.refused
+    );
+    assert_eq!(t.refused_count, whole.refused_count);
+}
+
+#[test]
+fn quoted_cells_spanning_lines_read_the_same_in_pieces() {
+    let text = "id,sx,sy\n1,2,3\n\"a\nb\",4,5\n# c\n6,\"7\",8\r\n9,x,1\n";
+    let shape = sniff(text).unwrap();
+    let whole = read(text, &shape, Some(0));
+    assert_eq!(whole.lines, vec![2, 3, 6]);
+    for cut in 1..text.len() {
+        same_table(&in_pieces(text, &shape, Some(0), cut), &whole);
+    }
+}
+
+#[test]
+fn a_byte_order_mark_inside_the_text_is_a_cells_text_in_every_reader() {
+    // Only the file's first one is dropped; one at a later line's start (two files pasted
+    // together) is refused as text, whole or in pieces, with quotes or without.
+    for text in ["\u{feff}1;2\n\u{feff}3;4\n", "a;b\n1;2\n\u{feff}3;\"4\"\n"] {
+        let shape = sniff(text).unwrap();
+        let whole = read(text, &shape, None);
+        assert_eq!(whole.refused_count, 1, "{text:?}");
+        for cut in 1..text.len() {
+            same_table(&in_pieces(text, &shape, None, cut), &whole);
+        }
+    }
+}
+
+#[test]
+fn a_nul_byte_in_a_later_piece_refuses_the_file() {
+    let shape = sniff("a,b\n1,2\n").unwrap();
+    let mut r = StreamReader::new(&shape, None);
+    assert!(r.push(b"a,b\n1,2\n").is_ok());
+    assert_eq!(r.push(b"3,\x004\n"), Err(TableError::Binary));
+}
+
+proptest::proptest! {
+    /// Without quotes the reader splits lines itself; with a quote added anywhere harmless
+    /// (a quoted first header cell) the `csv` crate reads: both give the same rows.
+    #[test]
+    fn the_plain_path_reads_what_the_csv_path_reads(
+        cells in proptest::collection::vec(
+            proptest::prop_oneof![
+                proptest::strategy::Just(String::new()),
+                proptest::strategy::Just(" ".to_string()),
+                "[-+]?[0-9]{1,4}(\\.[0-9]{0,3})?",
+                "[a-z#]{1,3}",
+            ],
+            0..60,
+        ),
+        ends in proptest::collection::vec(0u8..6, 60),
+    ) {
+        let mut body = String::new();
+        for (i, c) in cells.iter().enumerate() {
+            body.push_str(c);
+            let end = match ends[i] {
+                0 => "\n",
+                1 => "\r\n",
+                2 => "\r",
+                3 => "\n# note\n",
+                _ => ",",
+            };
+            body.push_str(end);
+        }
+        let plain = format!("h1,h2,h3\n{body}");
+        let quoted = format!("\"h1\",h2,h3\n{body}");
+        let shape = Shape {
+            separator: Separator::Comma,
+            decimal_comma: false,
+            header: Some(vec!["h1".into(), "h2".into(), "h3".into()]),
+            columns: 3,
+        };
+        for label in [None, Some(1)] {
+            same_table(&read(&plain, &shape, label), &read(&quoted, &shape, label));
+        }
+    }
+}
+
+proptest::proptest! {
+    /// Any text, cut anywhere, reads as the same table as read whole (what the fuzz target
+    /// checks, here from an alphabet dense in separators, quotes, comments and line ends).
+    #[test]
+    fn any_text_reads_the_same_in_pieces(
+        head in "[a-c]{1,2}([,;][a-c\"]{1,2}){1,3}\n",
+        body in "[0-9a#,;\"\r\n .\u{feff}]{0,80}",
+        cut in 1usize..9,
+    ) {
+        let text = format!("{head}{body}");
+        let Ok(shape) = sniff(&text) else { return Ok(()) };
+        for label in [None, Some(0)] {
+            same_table(&in_pieces(&text, &shape, label, cut), &read(&text, &shape, label));
+        }
+    }
 }
