@@ -351,34 +351,48 @@ pub fn read(text: &str, shape: &Shape, label: Option<usize>) -> Table {
         columns: shape.columns,
         ..Table::default()
     };
-    let mut skip_header = shape.header.is_some();
+    let mut at = Cursor {
+        skip_header: shape.header.is_some(),
+        lines: 0,
+    };
     read_into(
         &mut t,
         strip_bom(text).as_bytes(),
         shape,
         label,
-        &mut skip_header,
-        0,
+        &mut at,
+        None,
     );
     t
 }
 
-/// Reads the rows of `bytes` (whole lines of a text, the first of them line `lines_before + 1`
-/// of the file) into `t`. `skip_header` is set while the header line is still to come; it is
-/// cleared once it is skipped.
+/// Where a reading in pieces stands: whether the header line is still to come, and the line
+/// ends read so far.
+#[derive(Debug, Clone, Copy)]
+pub(crate) struct Cursor {
+    pub skip_header: bool,
+    pub lines: usize,
+}
+
+/// Reads the rows of `bytes` (whole lines of a text, the first of them line `at.lines + 1` of
+/// the file) into `t`, and moves `at` past them (the header skipped, the line ends counted).
 ///
 /// Comma, semicolon and tab tables with a quote character go through the `csv` crate (a quoted
 /// cell may hold separators and line ends); without one, each line is split at the separator
 /// directly, which reads the same rows (tested against the `csv` path) several times faster.
+/// `quoted` says whether `bytes` holds a quote, when the caller knows (`None`: look).
 pub(crate) fn read_into(
     t: &mut Table,
     bytes: &[u8],
     shape: &Shape,
     label: Option<usize>,
-    skip_header: &mut bool,
-    lines_before: usize,
+    at: &mut Cursor,
+    quoted: Option<bool>,
 ) {
-    match shape.separator {
+    let skip_header = &mut at.skip_header;
+    let lines_before = at.lines;
+    let quoted = quoted.unwrap_or_else(|| memchr::memchr(b'"', bytes).is_some());
+    at.lines += match shape.separator {
         Separator::Whitespace => {
             let text = String::from_utf8_lossy(bytes);
             for (i, l) in lines(&text).enumerate() {
@@ -397,18 +411,17 @@ pub(crate) fn read_into(
                     s.split_whitespace().map(str::as_bytes),
                 );
             }
+            pieces::line_ends(bytes)
         }
-        sep if memchr::memchr(b'"', bytes).is_none() => {
-            read_plain(
-                t,
-                bytes,
-                sep.byte(),
-                shape,
-                label,
-                skip_header,
-                lines_before,
-            );
-        }
+        sep if !quoted => read_plain(
+            t,
+            bytes,
+            sep.byte(),
+            shape,
+            label,
+            skip_header,
+            lines_before,
+        ),
         sep => {
             // The `csv` crate drops a byte-order mark at the start of what it reads; one that
             // is not at the file's start (the caller strips that) is a cell's text, so it gets
@@ -456,14 +469,16 @@ pub(crate) fn read_into(
                     }
                 }
             }
+            pieces::line_ends(bytes)
         }
-    }
+    };
 }
 
 /// A separated text without quotes, a line at a time, as the `csv` crate reads it: lines end
 /// at `\n`, `\r\n` or a lone `\r`; a line starting with `#` is a comment,
 /// which runs to the next `\n` (a lone `\r` does not end it there); a line whose cells
-/// are all blank is not a row.
+/// are all blank is not a row. Gives the line ends it read (as [`pieces::line_ends`] counts
+/// them).
 fn read_plain(
     t: &mut Table,
     bytes: &[u8],
@@ -472,21 +487,23 @@ fn read_plain(
     label: Option<usize>,
     skip_header: &mut bool,
     lines_before: usize,
-) {
+) -> usize {
     let mut rest = bytes;
-    let mut line = lines_before;
+    let mut ends = 0;
     while !rest.is_empty() {
+        let line = lines_before + ends + 1;
         if rest[0] == b'#' {
             // A comment runs to the next line feed (a lone CR does not end it), as the `csv`
             // crate reads it; a lone CR inside still counts as a line end.
             let end = memchr::memchr(b'\n', rest).map_or(rest.len(), |i| i + 1);
-            line += pieces::line_ends(&rest[..end]).max(1);
+            ends += pieces::line_ends(&rest[..end]);
             rest = &rest[end..];
             continue;
         }
         let (l, next) = match memchr::memchr2(b'\r', b'\n', rest) {
             None => (rest, &rest[rest.len()..]),
             Some(i) => {
+                ends += 1;
                 let end = if rest[i] == b'\r' && rest.get(i + 1) == Some(&b'\n') {
                     i + 2
                 } else {
@@ -496,7 +513,6 @@ fn read_plain(
             }
         };
         rest = next;
-        line += 1;
         if l.iter().all(|&b| b == sep || b.is_ascii_whitespace()) {
             continue;
         }
@@ -505,6 +521,7 @@ fn read_plain(
         }
         take_row(t, shape, label, line, l.split(|&b| b == sep));
     }
+    ends
 }
 
 fn refuse(t: &mut Table, line: usize, column: usize, reason: Reason) {

@@ -64,6 +64,20 @@ pub struct TableOutcome {
     pub refused: Vec<(usize, String)>,
 }
 
+impl TableOutcome {
+    /// Empty, with room for `rows` computed rows, so computing in chunks never regrows (and
+    /// never holds a table's results twice while copying them).
+    #[must_use]
+    pub fn with_room(rows: usize) -> Self {
+        Self {
+            rows: Vec::with_capacity(rows),
+            tensors: Vec::with_capacity(rows),
+            measures: Vec::with_capacity(rows),
+            refused: Vec::new(),
+        }
+    }
+}
+
 /// Which state the columns give, and the column of each component/gauge.
 ///
 /// # Errors

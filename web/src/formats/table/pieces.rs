@@ -3,7 +3,7 @@
 //! they come, so the file's text is never held whole, and the table read in pieces equals the
 //! table read whole (tested, and fuzzed with random cuts).
 
-use super::{read_into, strip_bom_bytes, Separator, Shape, Table, TableError};
+use super::{read_into, strip_bom_bytes, Cursor, Separator, Shape, Table, TableError};
 
 /// Line ends in `bytes` (`\n`, `\r\n` or a lone `\r`, each once): the lines a piece of text
 /// that ends just after a line feed adds.
@@ -31,8 +31,7 @@ pub struct StreamReader {
     whole: bool,
     /// No bytes read yet (a byte-order mark may still come).
     at_start: bool,
-    skip_header: bool,
-    lines_before: usize,
+    at: Cursor,
     bytes_seen: usize,
     table: Table,
 }
@@ -47,8 +46,10 @@ impl StreamReader {
             carry: Vec::new(),
             whole: false,
             at_start: true,
-            skip_header: shape.header.is_some(),
-            lines_before: 0,
+            at: Cursor {
+                skip_header: shape.header.is_some(),
+                lines: 0,
+            },
             bytes_seen: 0,
             table: Table {
                 columns: shape.columns,
@@ -74,7 +75,6 @@ impl StreamReader {
             return Err(TableError::Binary);
         }
         self.bytes_seen += bytes.len();
-        self.carry.extend_from_slice(bytes);
         if !self.whole
             && self.shape.separator != Separator::Whitespace
             && memchr::memchr(b'"', bytes).is_some()
@@ -82,18 +82,30 @@ impl StreamReader {
             self.whole = true;
         }
         if self.whole {
+            self.carry.extend_from_slice(bytes);
             return Ok(());
         }
-        let Some(end) = memchr::memrchr(b'\n', &self.carry) else {
+        let Some(last) = memchr::memrchr(b'\n', bytes) else {
+            self.carry.extend_from_slice(bytes);
             return Ok(());
         };
-        let carry = core::mem::take(&mut self.carry);
-        self.read_piece(&carry[..=end]);
-        self.carry = carry[end + 1..].to_vec();
+        // The line left over from the last push, completed; then the rest of this push's
+        // complete lines where they are (not copied); the partial last line is kept.
+        let mut from = 0;
+        if !self.carry.is_empty() {
+            from = memchr::memchr(b'\n', bytes).map_or(bytes.len(), |i| i + 1);
+            self.carry.extend_from_slice(&bytes[..from]);
+            let carry = core::mem::take(&mut self.carry);
+            self.read_piece(&carry, false);
+        }
+        if from <= last {
+            self.read_piece(&bytes[from..=last], false);
+        }
+        self.carry = bytes[last + 1..].to_vec();
         Ok(())
     }
 
-    fn read_piece(&mut self, piece: &[u8]) {
+    fn read_piece(&mut self, piece: &[u8], quoted: bool) {
         let piece = if core::mem::take(&mut self.at_start) {
             strip_bom_bytes(piece)
         } else {
@@ -104,10 +116,9 @@ impl StreamReader {
             piece,
             &self.shape,
             self.label,
-            &mut self.skip_header,
-            self.lines_before,
+            &mut self.at,
+            Some(quoted),
         );
-        self.lines_before += line_ends(piece);
     }
 
     /// Bytes pushed so far.
@@ -120,7 +131,7 @@ impl StreamReader {
     #[must_use]
     pub fn finish(mut self) -> Table {
         let carry = core::mem::take(&mut self.carry);
-        self.read_piece(&carry);
+        self.read_piece(&carry, self.whole);
         self.table
     }
 }

@@ -141,14 +141,14 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
             )
         };
         if rows <= CHUNK {
-            let mut out = TableOutcome::default();
+            let mut out = TableOutcome::with_room(rows);
             let r = step(&mut out, 0..rows);
             outcome.set(Some(r.map(|()| Arc::new(out)).map_err(|p| p.0)));
             return;
         }
         busy.set(Some(Busy::Computing(0.0)));
         spawn_local(async move {
-            let mut out = TableOutcome::default();
+            let mut out = TableOutcome::with_room(rows);
             let mut at = 0;
             while at < rows {
                 let end = (at + CHUNK).min(rows);
