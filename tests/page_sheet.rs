@@ -5,8 +5,7 @@
 //! PNG at twice the screen size, CSV). Screenshots go to `target/screens/`, PDFs to
 //! `target/sheets/`.
 
-use serde_json::Value;
-use std::path::{Path, PathBuf};
+use std::path::Path;
 use std::process::Command;
 use stresscase_tests::check::target_dir;
 use stresscase_tests::page::{Page, WAIT};
@@ -144,29 +143,6 @@ fn the_answer_is_on_the_first_screen_at_every_width() {
     p.no_console_errors();
 }
 
-fn axe_violations(p: &mut Page) -> Vec<String> {
-    let path = PathBuf::from(env!("CARGO_MANIFEST_DIR"))
-        .join("../target/npm/node_modules/axe-core/axe.min.js");
-    let axe = std::fs::read_to_string(&path).unwrap_or_else(|e| {
-        panic!(
-            "{}: {e} — `cargo xtask test` installs axe-core from npm",
-            path.display()
-        )
-    });
-    p.b.eval(&axe).unwrap();
-    let v: Value = p
-        .b
-        .eval(
-            "axe.run(document, { resultTypes: ['violations'] }).then(r => r.violations.filter(v => v.impact === 'serious' || v.impact === 'critical').map(v => v.id + ' (' + v.impact + '): ' + v.help + ' — ' + v.nodes.slice(0, 4).map(n => n.target.join(' ')).join(' | ')))",
-        )
-        .unwrap();
-    v.as_array()
-        .unwrap()
-        .iter()
-        .map(|x| x.as_str().unwrap_or_default().to_string())
-        .collect()
-}
-
 #[test]
 #[ignore = "needs the built page: run `cargo xtask test`"]
 fn accessibility_rules_find_nothing_serious() {
@@ -189,16 +165,16 @@ fn accessibility_rules_find_nothing_serious() {
         ) >= 5.0,
         "panel titles are not headings"
     );
-    let mut all = axe_violations(&mut p);
+    let mut all = p.axe_violations();
     // The decision panels with fatigue on, and a section with its plot.
     p.b.click("fatigue-on").unwrap();
     p.wait_for_id("in-ratio");
     p.b.click("src-section").unwrap();
     p.wait_for_id("scan-svg");
-    all.extend(axe_violations(&mut p));
+    all.extend(p.axe_violations());
     p.b.set_viewport(390, 844, true).unwrap();
     settle(&mut p);
-    all.extend(axe_violations(&mut p));
+    all.extend(p.axe_violations());
     assert!(all.is_empty(), "axe-core: {all:#?}");
 }
 

@@ -186,6 +186,10 @@ fn a_100k_row_stress_file_ranks_its_worst_row_and_opens_it() {
     p.b.eval("document.getElementById('table-trace')?.scrollIntoView()")
         .unwrap();
     p.shot("table-100k-pictures");
+    // The loaded table view (its kinds, refusals, list and pictures) passes the accessibility
+    // rules the rest of the page does.
+    let a11y = p.axe_violations();
+    assert!(a11y.is_empty(), "axe-core: {a11y:#?}");
     // Exports: every computed row with its measures, and the worst rows alone.
     p.b.click("table-export-all").unwrap();
     let all = String::from_utf8(p.downloaded("stresscase-all-rows.csv")).unwrap();

@@ -197,6 +197,31 @@ impl Page {
         );
     }
 
+    /// The serious and critical accessibility violations axe-core finds in the page as it is
+    /// now (axe-core from npm, installed by `cargo xtask test` into `target/npm`).
+    pub fn axe_violations(&mut self) -> Vec<String> {
+        let path = PathBuf::from(env!("CARGO_MANIFEST_DIR"))
+            .join("../target/npm/node_modules/axe-core/axe.min.js");
+        let axe = std::fs::read_to_string(&path).unwrap_or_else(|e| {
+            panic!(
+                "{}: {e} — `cargo xtask test` installs axe-core from npm",
+                path.display()
+            )
+        });
+        self.b.eval(&axe).unwrap();
+        let v: Value = self
+            .b
+            .eval(
+                "axe.run(document, { resultTypes: ['violations'] }).then(r => r.violations.filter(v => v.impact === 'serious' || v.impact === 'critical').map(v => v.id + ' (' + v.impact + '): ' + v.help + ' — ' + v.nodes.slice(0, 4).map(n => n.target.join(' ')).join(' | ')))",
+            )
+            .unwrap();
+        v.as_array()
+            .unwrap()
+            .iter()
+            .map(|x| x.as_str().unwrap_or_default().to_string())
+            .collect()
+    }
+
     /// Fails on any console error so far.
     pub fn no_console_errors(&mut self) {
         let errs = self.b.console_errors().expect("console");

@@ -7,9 +7,12 @@
 //!   headless-Chromium tests against it)
 //! - `build`: install what is missing, build the page and pack it into `dist/` (opens from disk
 //!   too) and `target/stresscase-offline.zip`
-//! - `bench`: the principal-value benchmark against numpy (installs numpy if missing)
+//! - `bench`: the benchmarks, each beside its peer in the same run: principal values against
+//!   numpy, a 1e6-row table natively and in the built page against pandas + numpy, keystrokes
+//!   in the built page (installs numpy, pandas and Chromium if missing; builds the page)
 //! - `refdata`: regenerate the 50-digit mpmath reference data (installs mpmath if missing)
-//! - `fuzz [RUNS]`: libFuzzer on the case-link decoder and the saved-cases importer, RUNS
+//! - `fuzz [RUNS]`: libFuzzer on the case-link decoder, the saved-cases importer and the table
+//!   reader, RUNS
 //!   executions each (default 10 million; installs cargo-fuzz if missing)
 //! - `setup`: only install what is missing
 //!
@@ -346,6 +349,8 @@ fn ensure_python_module(module: &str) -> Result {
     Ok(())
 }
 
+/// The native benchmarks, then the built page's (built first; Chromium installed if missing):
+/// each prints its figures beside its named peer's from the same run.
 fn bench() -> Result {
     ensure_python_module("numpy")?;
     ensure_python_module("pandas")?;
@@ -353,6 +358,16 @@ fn bench() -> Result {
         run(
             &cargo(),
             &["bench", "-p", "stresscase-tests", "--bench", bench],
+        )?;
+    }
+    setup(true)?;
+    build_page()?;
+    let dist = root().join("dist").display().to_string();
+    for bench in ["page_table_speed", "page_keystroke"] {
+        run_env(
+            &cargo(),
+            &["bench", "-p", "stresscase-tests", "--bench", bench],
+            &[("STRESSCASE_DIST", &dist)],
         )?;
     }
     Ok(())

@@ -56,8 +56,6 @@ pub struct TableProblem(pub String);
 pub struct TableOutcome {
     /// Index (into the rows given) of each computed row.
     pub rows: Vec<usize>,
-    /// Its stress tensor, in the case's unit.
-    pub tensors: Vec<StressTensor>,
     /// Its measures, in the case's unit.
     pub measures: Vec<PointMeasures>,
     /// Rows the path refused: index and reason.
@@ -71,7 +69,6 @@ impl TableOutcome {
     pub fn with_room(rows: usize) -> Self {
         Self {
             rows: Vec::with_capacity(rows),
-            tensors: Vec::with_capacity(rows),
             measures: Vec::with_capacity(rows),
             refused: Vec::new(),
         }
@@ -165,60 +162,93 @@ pub fn evaluate_rows(
     range: core::ops::Range<usize>,
     out: &mut TableOutcome,
 ) -> Result<(), TableProblem> {
-    let state = row_state(kinds, unit)?;
+    let path = RowPath::new(kinds, unit, case)?;
     let row = |i: usize| &values[i * columns..(i + 1) * columns];
-    let first_new = out.tensors.len();
+    let first_new = out.rows.len();
     let refused_before = out.refused.len();
-    match state {
-        RowState::Stress(from) => {
-            let col: [Option<usize>; 6] =
-                core::array::from_fn(|k| column_of(kinds, ColumnKind::Stress(k as u8)));
-            let k = from.convert(1.0, case.unit);
-            out.rows.reserve(range.len());
-            out.tensors.reserve(range.len());
-            for i in range {
-                let r = row(i);
-                let c: [f64; 6] = core::array::from_fn(|j| col[j].map_or(0.0, |c| r[c] * k));
-                match StressTensor::new(c[0], c[1], c[2], c[3], c[4], c[5]) {
-                    Ok(t) => {
-                        out.rows.push(i);
-                        out.tensors.push(t);
-                    }
-                    Err(e) => out.refused.push((i, e.to_string())),
-                }
+    // The chunk's tensors live only until they are measured: a table's results keep the
+    // measures, and a row opened as the case is sent through its path again.
+    let mut tensors = Vec::with_capacity(range.len());
+    for i in range {
+        match path.tensor(row(i), case) {
+            Ok(t) => {
+                out.rows.push(i);
+                tensors.push(t);
             }
-        }
-        RowState::Rosette | RowState::Strain => {
-            let (choices, nums) = path_numbers(state, kinds, &case.choices)?;
-            for i in range {
-                let r = row(i);
-                let own = nums.iter().map(|&(n, c)| (n, r[c])).collect();
-                let n = RowNumbers { case, own };
-                match source::evaluate(&choices, &n, case.unit, case.angle_unit) {
-                    Ok(Some((t, _))) => {
-                        out.rows.push(i);
-                        out.tensors.push(t);
-                    }
-                    Ok(None) => out.refused.push((i, "no stress state".into())),
-                    Err(p) => out.refused.push((i, p.message)),
-                }
-            }
+            Err(why) => out.refused.push((i, why)),
         }
     }
-    match measure_all(
-        &out.tensors[first_new..],
-        judgement.in_use,
-        &judgement.strengths,
-    ) {
+    match measure_all(&tensors, judgement.in_use, &judgement.strengths) {
         Ok(m) => {
             out.measures.extend(m);
             Ok(())
         }
         Err(e) => {
             out.rows.truncate(first_new);
-            out.tensors.truncate(first_new);
             out.refused.truncate(refused_before);
             Err(TableProblem(e.to_string()))
+        }
+    }
+}
+
+/// The stress state of one row (`row`: its numbers) through the case's path, as
+/// [`evaluate_rows`] finds it; `Err` holds why the row is refused.
+///
+/// # Errors
+/// As [`evaluate`] for the columns; the row's own refusal as text.
+pub fn row_tensor(
+    row: &[f64],
+    kinds: &[ColumnKind],
+    unit: StressUnit,
+    case: &Case,
+) -> Result<StressTensor, String> {
+    RowPath::new(kinds, unit, case)
+        .map_err(|p| p.0)?
+        .tensor(row, case)
+}
+
+/// How a row becomes a stress state: its components scaled to the case's unit, or its gauge
+/// readings or strains through the case's rosette or Hooke's-law path.
+enum RowPath {
+    Stress {
+        col: [Option<usize>; 6],
+        scale: f64,
+    },
+    Source {
+        choices: Choices,
+        nums: Vec<(Num, usize)>,
+    },
+}
+
+impl RowPath {
+    fn new(kinds: &[ColumnKind], unit: StressUnit, case: &Case) -> Result<Self, TableProblem> {
+        Ok(match row_state(kinds, unit)? {
+            RowState::Stress(from) => RowPath::Stress {
+                col: core::array::from_fn(|k| column_of(kinds, ColumnKind::Stress(k as u8))),
+                scale: from.convert(1.0, case.unit),
+            },
+            state => {
+                let (choices, nums) = path_numbers(state, kinds, &case.choices)?;
+                RowPath::Source { choices, nums }
+            }
+        })
+    }
+
+    fn tensor(&self, r: &[f64], case: &Case) -> Result<StressTensor, String> {
+        match self {
+            RowPath::Stress { col, scale } => {
+                let c: [f64; 6] = core::array::from_fn(|j| col[j].map_or(0.0, |c| r[c] * scale));
+                StressTensor::new(c[0], c[1], c[2], c[3], c[4], c[5]).map_err(|e| e.to_string())
+            }
+            RowPath::Source { choices, nums } => {
+                let own = nums.iter().map(|&(n, c)| (n, r[c])).collect();
+                let n = RowNumbers { case, own };
+                match source::evaluate(choices, &n, case.unit, case.angle_unit) {
+                    Ok(Some((t, _))) => Ok(t),
+                    Ok(None) => Err("no stress state".into()),
+                    Err(p) => Err(p.message),
+                }
+            }
         }
     }
 }
@@ -318,7 +348,8 @@ mod tests {
         let values = [0.5, 640.0, 215.0, -180.0, 1.0, 0.0, 0.0, 0.0];
         let kinds = [ColumnKind::Time, Gauge(0), Gauge(1), Gauge(2)];
         let out = evaluate(&values, 4, &kinds, StressUnit::MPa, &c, &e.judgement).unwrap();
-        assert_eq!(out.tensors[0], e.tensor);
+        let t = row_tensor(&values[..4], &kinds, StressUnit::MPa, &c).unwrap();
+        assert_eq!(t, e.tensor);
         assert_eq!(out.measures[1].factor, f64::INFINITY);
         // A fourth gauge column does not fit a three-gauge rosette.
         let kinds = [Gauge(3), Gauge(0), Gauge(1), Gauge(2)];
@@ -334,7 +365,9 @@ mod tests {
         let values = [300.0, 520.0, -160.0];
         let kinds = [Strain(3), Strain(0), Strain(1)];
         let out = evaluate(&values, 3, &kinds, StressUnit::MPa, &c, &e.judgement).unwrap();
-        assert_eq!(out.tensors[0], e.tensor);
+        assert_eq!(out.rows, vec![0]);
+        let t = row_tensor(&values, &kinds, StressUnit::MPa, &c).unwrap();
+        assert_eq!(t, e.tensor);
         let p = evaluate(
             &values,
             3,

@@ -3,12 +3,12 @@
 
 use super::reading::Loaded;
 use super::Outcome;
-use crate::model::case::{CaseForm, Field, Mode};
+use crate::model::case::{Case, CaseForm, Field, Mode};
 use crate::model::choices::Source;
 use crate::model::evaluation::Evaluation;
 use crate::model::inputs::Num;
 use crate::model::numfmt::{format_for_entry, format_sig};
-use crate::model::table::{row_state, ColumnKind, RowState, TableOutcome};
+use crate::model::table::{row_state, row_tensor, ColumnKind, RowState, TableOutcome};
 use leptos::prelude::*;
 use std::sync::Arc;
 use stresscase_core::points::{worst_few, Measure};
@@ -79,39 +79,51 @@ pub fn open_row(f: &mut CaseForm, l: &Loaded, out: &TableOutcome, k: usize, unit
     let i = out.rows[k];
     let row = l.table.row(i);
     let line = l.table.lines[i];
+    let state = row_state(&l.kinds, unit);
+    // A typed row goes through the case's path again (the results keep only the measures);
+    // the case on screen produced the listed rows, so this cannot fail unless it changed.
+    let typed = match state {
+        Ok(RowState::Rosette | RowState::Strain) => None,
+        _ => {
+            let Some(t) = Case::from_form(f)
+                .ok()
+                .and_then(|case| row_tensor(row, &l.kinds, unit, &case).ok())
+            else {
+                return;
+            };
+            Some(t)
+        }
+    };
     let id = l
         .table
         .label(i)
         .map_or_else(|| format!("line {line}"), |s| format!("{s} (line {line})"));
     f.title = format!("{id} of {}", l.from);
-    match row_state(&l.kinds, unit) {
-        Ok(RowState::Rosette) => {
-            f.choices.source = Source::Rosette;
-            for (j, kind) in l.kinds.iter().enumerate() {
-                if let ColumnKind::Gauge(g) = kind {
-                    f.set_text(Field::Src(Num::gauge_reading(*g)), format_for_entry(row[j]));
-                }
+    if let Some(t) = typed {
+        f.choices.source = Source::Typed;
+        f.mode = if t.is_plane() {
+            Mode::Plane
+        } else {
+            Mode::Full
+        };
+        for (field, v) in Field::STRESS.into_iter().zip(t.components()) {
+            f.set_text(field, format_for_entry(v));
+        }
+        return;
+    }
+    if state == Ok(RowState::Rosette) {
+        f.choices.source = Source::Rosette;
+        for (j, kind) in l.kinds.iter().enumerate() {
+            if let ColumnKind::Gauge(g) = kind {
+                f.set_text(Field::Src(Num::gauge_reading(*g)), format_for_entry(row[j]));
             }
         }
-        Ok(RowState::Strain) => {
-            const NUMS: [Num; 6] = [Num::Ex, Num::Ey, Num::Ez, Num::Gxy, Num::Gyz, Num::Gzx];
-            f.choices.source = Source::Strain;
-            for (j, kind) in l.kinds.iter().enumerate() {
-                if let ColumnKind::Strain(s) = kind {
-                    f.set_text(Field::Src(NUMS[usize::from(*s)]), format_for_entry(row[j]));
-                }
-            }
-        }
-        _ => {
-            let t = out.tensors[k];
-            f.choices.source = Source::Typed;
-            f.mode = if t.is_plane() {
-                Mode::Plane
-            } else {
-                Mode::Full
-            };
-            for (field, v) in Field::STRESS.into_iter().zip(t.components()) {
-                f.set_text(field, format_for_entry(v));
+    } else {
+        const NUMS: [Num; 6] = [Num::Ex, Num::Ey, Num::Ez, Num::Gxy, Num::Gyz, Num::Gzx];
+        f.choices.source = Source::Strain;
+        for (j, kind) in l.kinds.iter().enumerate() {
+            if let ColumnKind::Strain(s) = kind {
+                f.set_text(Field::Src(NUMS[usize::from(*s)]), format_for_entry(row[j]));
             }
         }
     }
@@ -198,9 +210,9 @@ pub fn WorstRows(
 mod tests {
     use super::super::reading::load;
     use super::*;
-    use crate::model::case::Case;
     use crate::model::table::evaluate;
     use stresscase_core::points::worst_first;
+    use stresscase_core::StressTensor;
 
     #[test]
     fn an_opened_row_is_the_case_on_screen() {
@@ -221,7 +233,9 @@ mod tests {
         assert_eq!(l.table.lines[out.rows[worst]], 3);
         open_row(&mut f, &l, &out, worst, StressUnit::MPa);
         let opened = f.evaluate().unwrap();
-        assert_eq!(opened.tensor, out.tensors[worst]);
+        let row = l.table.row(out.rows[worst]);
+        assert_eq!(row[1..], [300.0, 0.0, 0.0]); // the label column reads as NaN
+        assert_eq!(opened.tensor, StressTensor::plane(300.0, 0.0, 0.0).unwrap());
         assert_eq!(f.title, "8 (line 3) of t.csv");
     }
 }
