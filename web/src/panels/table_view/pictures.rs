@@ -63,6 +63,33 @@ fn allowable_text(a: f64, by: Measure, unit: &str) -> String {
     }
 }
 
+/// What the case says of `by`: its allowable (and how it is worked out), and the criterion in
+/// use; `None` while the case has a problem.
+type Limit = (Option<(f64, &'static str)>, Criterion);
+
+fn limit_of(shown: Memo<Option<Evaluation>>, by: Measure) -> Option<Limit> {
+    shown.with(|e| {
+        e.as_ref()
+            .map(|e| (allowable_of(e, by), e.judgement.in_use))
+    })
+}
+
+/// The caption's sentence on the allowable line: its formula and value, or why there is none.
+fn allowable_sentence(limit: Limit, by: Measure, unit: &str) -> String {
+    match limit.0 {
+        Some((a, words)) => format!(
+            "Dashed: the allowable, {words} = {}{}.",
+            format_sig(a, 4),
+            if is_stress(by) {
+                format!(" {unit}")
+            } else {
+                String::new()
+            }
+        ),
+        None => no_allowable(by, limit.1),
+    }
+}
+
 /// Why no allowable is drawn for `by`.
 fn no_allowable(by: Measure, criterion: Criterion) -> String {
     format!(
@@ -140,10 +167,7 @@ pub fn MeasureTrace(
         let by = ranking.get()?;
         let l = loaded.get()?;
         let unit = form.with(|f| f.unit.symbol());
-        let limit = shown.with(|e| {
-            e.as_ref()
-                .map(|e| (allowable_of(e, by), e.judgement.in_use))
-        })?;
+        let limit = limit_of(shown, by)?;
         outcome.with(|o| {
             let Some(Ok(o)) = o else { return None };
             let time = l.kinds.iter().position(|k| *k == ColumnKind::Time);
@@ -175,21 +199,12 @@ pub fn MeasureTrace(
             };
             let drawn = t.columns.iter().filter(|c| c.is_some()).count();
             let (lo, hi) = t.range.unwrap_or((f64::NAN, f64::NAN));
-            let caption = match limit.0 {
-                Some((a, words)) => format!(
-                    "{} of {} rows, least and greatest in each of {drawn} pixel columns. Dashed: the allowable, {words} = {}{}.",
-                    measure_symbol(by),
-                    o.rows.len(),
-                    format_sig(a, 4),
-                    if is_stress(by) { format!(" {unit}") } else { String::new() },
-                ),
-                None => format!(
-                    "{} of {} rows, least and greatest in each of {drawn} pixel columns. {}",
-                    measure_symbol(by),
-                    o.rows.len(),
-                    no_allowable(by, limit.1)
-                ),
-            };
+            let caption = format!(
+                "{} of {} rows, least and greatest in each of {drawn} pixel columns. {}",
+                measure_symbol(by),
+                o.rows.len(),
+                allowable_sentence(limit, by, unit)
+            );
             let not_drawn = (t.not_drawn > 0).then(|| format!(
                 " {} rows have no finite value and are not drawn (n = ∞ for an unloaded row; undefined where the criterion does not apply).",
                 t.not_drawn
@@ -230,10 +245,7 @@ pub fn MeasureHistogram(
         let plot_w = w - LEFT - RIGHT;
         let by = ranking.get()?;
         let unit = form.with(|f| f.unit.symbol());
-        let limit = shown.with(|e| {
-            e.as_ref()
-                .map(|e| (allowable_of(e, by), e.judgement.in_use))
-        })?;
+        let limit = limit_of(shown, by)?;
         outcome.with(|o| {
             let Some(Ok(o)) = o else { return None };
             let values = o.measures.iter().map(|m| by.of(m));
@@ -271,14 +283,7 @@ pub fn MeasureHistogram(
             if h.not_finite > 0 {
                 let _ = write!(caption, " {} rows have no finite value (n = ∞ for an unloaded row).", h.not_finite);
             }
-            match limit.0 {
-                Some((a, words)) => {
-                    let _ = write!(caption, " Dashed: the allowable, {words} = {}{}.", format_sig(a, 4), if is_stress(by) { format!(" {unit}") } else { String::new() });
-                }
-                None => {
-                    let _ = write!(caption, " {}", no_allowable(by, limit.1));
-                }
-            }
+            let _ = write!(caption, " {}", allowable_sentence(limit, by, unit));
             Some(view! {
                 <figure class="scan-plot table-picture">
                     <svg id="table-histogram" viewBox=format!("0 0 {w} {H}") role="img"
