@@ -36,6 +36,8 @@ shim! {
     log10(x)
     /// Largest integer not above x.
     floor(x)
+    /// Smallest integer not below x.
+    ceil(x)
 }
 
 /// `x` wrapped into [0, period) (the Euclidean remainder, which `core` lacks for floats).

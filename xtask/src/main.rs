@@ -304,8 +304,11 @@ fn test() -> Result {
         args.extend_from_slice(features);
         run(&c, &args)?;
     }
-    // The table tests compare with Python's csv module (standard library) and numpy.
-    ensure_python_module("numpy")?;
+    // The table tests compare with Python's csv module (standard library) and numpy; the life
+    // tests with the `rainflow` and `fatpack` packages.
+    for module in ["numpy", "rainflow", "fatpack"] {
+        ensure_python_module(module)?;
+    }
     run(&c, &["test", "--workspace"])?;
     build_page()?;
     let dist = root().join("dist");
@@ -354,7 +357,7 @@ fn ensure_python_module(module: &str) -> Result {
 fn bench() -> Result {
     ensure_python_module("numpy")?;
     ensure_python_module("pandas")?;
-    for bench in ["principal_speed", "table_speed"] {
+    for bench in ["principal_speed", "table_speed", "rainflow_speed"] {
         run(
             &cargo(),
             &["bench", "-p", "stresscase-tests", "--bench", bench],
