@@ -38,8 +38,29 @@ fn expected(v: &Value) -> Case {
     ]
     .into_iter()
     .collect();
+    let mut history = Vec::new();
     if let Some(src) = v.get("source") {
         let word = |k: &str| src["choices"][k].as_str();
+        if let Some(t) = word("life") {
+            choices.life = t == "on";
+        }
+        if let Some(t) = word("lof") {
+            choices.life_of = tokens::value(&tokens::LIFE_OF, t).expect("lof");
+        }
+        if let Some(t) = word("sn") {
+            choices.sn = tokens::value(&tokens::SN_FROM, t).expect("sn");
+        }
+        if let Some(t) = word("msc") {
+            choices.mean_stress = tokens::value(&tokens::MEAN_STRESS, t).expect("msc");
+        }
+        if let Some(h) = src.get("history") {
+            history = h
+                .as_array()
+                .expect("history")
+                .iter()
+                .map(|x| x.as_f64().expect("number"))
+                .collect();
+        }
         let c = &mut choices;
         if let Some(t) = word("src") {
             c.source = tokens::value(&tokens::SOURCE, t).expect("src");
@@ -163,6 +184,7 @@ fn expected(v: &Value) -> Case {
         },
         choices,
         numbers,
+        history,
     }
 }
 
@@ -191,17 +213,26 @@ fn corpus() -> Vec<(String, String)> {
             (says.to_string(), link.to_string())
         })
         .collect();
-    // Generated: 100 KB of junk, an over-long valid-looking link, a huge number.
+    // Generated: 300 KB of junk, an over-long valid-looking link (the limit is 256 KiB), a
+    // huge number, a history of one value.
     out.push((
         "characters long".into(),
-        format!("#{}", "x".repeat(100_000)),
+        format!("#{}", "x".repeat(300_000)),
     ));
     out.push((
         "characters long".into(),
         format!(
             "#v=1&mode=plane&unit=MPa&sx=1&sy=2&txy=3&note={}",
-            "a".repeat(40_000)
+            "a".repeat(270_000)
         ),
+    ));
+    out.push((
+        "a load history has 2 to 5000 values, found 1".into(),
+        "#v=1&mode=plane&unit=MPa&sx=1&sy=2&txy=3&fat=on&R=0&fd=25&ftemp=20&frel=90&life=on&lof=history&hist=5".into(),
+    ));
+    out.push((
+        "'hist' is not used".into(),
+        "#v=1&mode=plane&unit=MPa&sx=1&sy=2&txy=3&fat=on&R=0&fd=25&ftemp=20&frel=90&life=on&hist=5,6".into(),
     ));
     out.push((
         "longer than 200 characters".into(),

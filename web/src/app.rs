@@ -13,6 +13,7 @@ use crate::panels::{
     element_turn::ElementTurn,
     fatigue_check::FatigueCheck,
     headline::Headline,
+    life_check::LifeCheck,
     link_notice::LinkNotice,
     mohr_diagram::{MohrDiagram, NarrowScreen},
     number_field::SharedResult,
@@ -169,6 +170,7 @@ pub fn App() -> impl IntoView {
         <div class="decision" class:stale=move || stale.get()>
             <Verdict form=form shown=shown stale=stale/>
             <FatigueCheck form=form shown=shown stale=stale/>
+            <LifeCheck form=form shown=shown stale=stale/>
         </div>
         <ResultsPanel shown=shown stale=stale/>
         <TableView form=form shown=shown/>

@@ -333,6 +333,8 @@ fn test() -> Result {
             "page_sheet",
             "--test",
             "page_table",
+            "--test",
+            "page_life",
             "--",
             "--ignored",
             "--test-threads=2",

@@ -29,12 +29,13 @@
 //! stress keys are refused: the tensor is derived.
 //!
 //! Decoding is strict: an unknown or repeated key, a missing one, a non-number, a non-finite
-//! number, a text with `<script` or `javascript:`, or a link over 32 KiB is refused with
+//! number, a text with `<script` or `javascript:`, or a link over 256 KiB is refused with
 //! a [`LinkError`] naming the problem. Nothing in a link is ever run or inserted as markup.
 
 pub use crate::model::case::Case;
 use crate::model::case::{check_text, Mode, MAX_NOTE, MAX_TITLE, ZERO_NORMAL};
 use crate::model::choices::{tokens, Source};
+use crate::model::entry::MAX_HISTORY;
 use crate::model::inputs::{Num, ELASTIC};
 use crate::model::numfmt::write_number;
 use core::fmt;
@@ -49,9 +50,10 @@ use stresscase_core::{AngleUnit, ShearAxis, StressUnit};
 /// The link version this release writes.
 pub const LINK_VERSION: &str = "1";
 /// Longest link accepted, in bytes after `#`. It must hold the longest valid case: a title and
-/// note at their limits in 4-byte characters percent-encode to 12 bytes each, plus the numbers.
-pub const MAX_LINK_LEN: usize = 32 * 1024;
-const _: () = assert!((MAX_TITLE + MAX_NOTE) * 12 + 4096 <= MAX_LINK_LEN);
+/// note at their limits in 4-byte characters percent-encode to 12 bytes each, plus the numbers,
+/// plus a load history of [`MAX_HISTORY`] values of at most 24 characters and a comma each.
+pub const MAX_LINK_LEN: usize = 256 * 1024;
+const _: () = assert!((MAX_TITLE + MAX_NOTE) * 12 + 4096 + MAX_HISTORY * 25 <= MAX_LINK_LEN);
 
 /// Characters left as they are in values: letters, digits and `-._~,` (so numbers and lists
 /// stay readable).
@@ -97,6 +99,8 @@ pub enum LinkError {
     BadText(&'static str, &'static str),
     /// A key the case's source path does not use.
     NotUsed(&'static str, &'static str),
+    /// A load history with too few or too many values.
+    HistoryLength(usize),
 }
 
 fn shorten(s: &str) -> String {
@@ -142,6 +146,10 @@ impl fmt::Display for LinkError {
             ),
             Self::ZeroNormal => write!(f, "{ZERO_NORMAL}"),
             Self::BadText(k, why) => write!(f, "{k}: {why}"),
+            Self::HistoryLength(n) => write!(
+                f,
+                "hist: a load history has 2 to {MAX_HISTORY} values, found {n}"
+            ),
             Self::NotUsed(k, src) => write!(
                 f,
                 "key '{k}' is not used by this case (src={src} and the choices made)"
@@ -165,9 +173,9 @@ fn read_number(key: &'static str, raw: &str) -> Result<f64, LinkError> {
     }
 }
 
-const KEYS: [&str; 15] = [
+const KEYS: [&str; 16] = [
     "v", "title", "note", "mode", "unit", "sx", "sy", "sz", "txy", "tyz", "tzx", "theta", "au",
-    "n", "shear",
+    "n", "shear", "hist",
 ];
 
 impl Case {
@@ -233,6 +241,10 @@ impl Case {
             if let Some(v) = self.numbers.get(&n) {
                 parts.push(format!("{}={}", n.key(), write_number(*v)));
             }
+        }
+        if self.choices.history_on() {
+            let values: Vec<String> = self.history.iter().map(|&v| write_number(v)).collect();
+            parts.push(format!("hist={}", values.join(",")));
         }
         parts.join("&")
     }
@@ -378,6 +390,21 @@ impl Case {
         check_text(&title, MAX_TITLE).map_err(|why| LinkError::BadText("title", why))?;
         let note = take("note").unwrap_or("").to_string();
         check_text(&note, MAX_NOTE).map_err(|why| LinkError::BadText("note", why))?;
+        let history = match (take("hist"), choices.history_on()) {
+            (Some(_), false) => return Err(LinkError::NotUsed("hist", src)),
+            (None, true) => return Err(LinkError::Missing("hist")),
+            (None, false) => Vec::new(),
+            (Some(v), true) => {
+                let values = v
+                    .split(',')
+                    .map(|x| read_number("hist", x))
+                    .collect::<Result<Vec<f64>, _>>()?;
+                if !(2..=MAX_HISTORY).contains(&values.len()) {
+                    return Err(LinkError::HistoryLength(values.len()));
+                }
+                values
+            }
+        };
         Ok(Self {
             title,
             note,
@@ -390,6 +417,7 @@ impl Case {
             shear_axis,
             choices,
             numbers,
+            history,
         })
     }
 }

@@ -3,7 +3,7 @@
 //! on to the results). No browser types here, so all of it is tested natively.
 
 use crate::model::choices::{Choices, Cycle, ElasticFrom, MaterialPick, Source};
-use crate::model::entry::parse_number;
+use crate::model::entry::{parse_history, parse_number};
 use crate::model::inputs::{Num, Quantity};
 use crate::model::numfmt::{format_for_entry, write_number};
 use crate::model::source::Numbers;
@@ -69,6 +69,8 @@ pub struct Case {
     pub choices: Choices,
     /// The numbers the path uses (exactly [`Choices::active`]), in their entry units.
     pub numbers: BTreeMap<Num, f64>,
+    /// The typed load history in `unit` (empty unless the life is of a history).
+    pub history: Vec<f64>,
 }
 
 impl Case {
@@ -121,6 +123,17 @@ impl Case {
                 });
             }
         }
+        let history = if form.choices.history_on() {
+            parse_history(&form.history).unwrap_or_else(|message| {
+                problems.push(FieldProblem {
+                    field: Field::History,
+                    message,
+                });
+                Vec::new()
+            })
+        } else {
+            Vec::new()
+        };
         if !problems.is_empty() {
             return Err(problems);
         }
@@ -143,6 +156,7 @@ impl Case {
             shear_axis: form.shear_axis,
             choices,
             numbers,
+            history,
         })
     }
 
@@ -164,6 +178,14 @@ impl Case {
         f.choices = self.choices;
         for (&n, &v) in &self.numbers {
             f.nums.insert(n, write_number(v));
+        }
+        if !self.history.is_empty() {
+            f.history = self
+                .history
+                .iter()
+                .map(|&v| write_number(v))
+                .collect::<Vec<_>>()
+                .join(", ");
         }
         f
     }
@@ -206,6 +228,8 @@ pub enum Field {
     Title,
     /// Case note (text).
     Note,
+    /// The typed load history (numbers in the case unit).
+    History,
     /// A number of a source path (section, rosette, strains, elastic constants).
     Src(Num),
 }
@@ -239,6 +263,7 @@ impl Field {
             Field::Nz => "nz",
             Field::Title => "title",
             Field::Note => "note",
+            Field::History => "load history",
             Field::Src(n) => n.key(),
         }
     }
@@ -259,6 +284,7 @@ impl Field {
             Field::Nz => "in-nz",
             Field::Title => "in-title",
             Field::Note => "in-note",
+            Field::History => "in-history",
             Field::Src(n) => n.id(),
         }
     }
@@ -286,6 +312,8 @@ pub struct CaseForm {
     pub title: String,
     /// Free text about the case.
     pub note: String,
+    /// The load history as typed (used when the life is of a history).
+    pub history: String,
     /// Plane or 3D.
     pub mode: Mode,
     /// Unit of every stress field.
@@ -325,6 +353,8 @@ impl CaseForm {
             typed: stress.clone().map(|s| (s, StressUnit::MPa)),
             title: "Demo (invented): weld toe of the lifting-eye plate on a 3-tonne hoist crossbeam, top surface point".into(),
             note: String::new(),
+            // Invented: one lift of the hoist, peaks and valleys at the weld toe.
+            history: "0, 120, 15, 135, -40, 110, 5, 150, 30, 95, -25, 140, 0".into(),
             mode: Mode::Plane,
             unit: StressUnit::MPa,
             stress,
@@ -464,6 +494,7 @@ impl CaseForm {
             Field::Nz => &self.normal[2],
             Field::Title => &self.title,
             Field::Note => &self.note,
+            Field::History => &self.history,
             Field::Src(n) => self.nums.get(&n).map_or("", String::as_str),
             f => &self.stress[stress_index(f)],
         }
@@ -478,6 +509,7 @@ impl CaseForm {
             Field::Nz => self.normal[2] = text,
             Field::Title => self.title = text,
             Field::Note => self.note = text,
+            Field::History => self.history = text,
             Field::Src(n) => {
                 self.nums.insert(n, text);
             }
@@ -494,6 +526,7 @@ impl CaseForm {
     pub fn is_active(&self, field: Field) -> bool {
         match field {
             Field::Src(n) => self.choices.active().contains(&n),
+            Field::History => self.choices.history_on(),
             f if Field::STRESS.contains(&f) => {
                 self.choices.source == Source::Typed
                     && !(self.mode == Mode::Plane && f.out_of_plane())
@@ -513,6 +546,14 @@ impl CaseForm {
             }
         }
         self.convert_quantity(Quantity::CaseStress, self.unit.convert(1.0, to));
+        if let Ok(h) = parse_history(&self.history) {
+            let k = self.unit.convert(1.0, to);
+            self.history = h
+                .iter()
+                .map(|&v| format_for_entry(v * k))
+                .collect::<Vec<_>>()
+                .join(", ");
+        }
         self.unit = to;
     }
 
@@ -559,6 +600,7 @@ impl CaseForm {
             Field::Src(n) if n.is_optional() && self.text(field).trim().is_empty() => None,
             Field::Title => check_text(&self.title, MAX_TITLE).err().map(str::to_string),
             Field::Note => check_text(&self.note, MAX_NOTE).err().map(str::to_string),
+            Field::History => parse_history(&self.history).err(),
             _ => read_field(field, self.text(field)).err(),
         }
     }

@@ -142,6 +142,50 @@ pub struct Choices {
     /// The fatigue criterion whose factor is the fatigue verdict (first-cycle yield is always
     /// judged beside it).
     pub fatigue_criterion: FatigueCriterion,
+    /// Whether the life in cycles is worked out (with the fatigue check on).
+    pub life: bool,
+    /// What the life is of: the fatigue check's cycle, or a load history.
+    pub life_of: LifeOf,
+    /// Which S–N line.
+    pub sn: SnFrom,
+    /// The mean-stress correction to a fully reversed amplitude.
+    pub mean_stress: MeanStressPick,
+}
+
+/// What the life is worked out for.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum LifeOf {
+    /// The fatigue check's cycle, repeated.
+    #[default]
+    Cycle,
+    /// A pasted load history (stress values at the point), counted by rainflow.
+    History,
+}
+
+/// Where the S–N line comes from.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum SnFrom {
+    /// Through (10³, f·Sut) and (10⁶, Se) with f estimated from Sut.
+    #[default]
+    Estimate,
+    /// The same line with f typed.
+    Fraction,
+    /// The user's own Basquin curve.
+    Own,
+}
+
+/// A mean-stress correction (Morrow's σ′f is a typed number).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum MeanStressPick {
+    /// σa/(1 − σm/Sut).
+    #[default]
+    Goodman,
+    /// σa/(1 − (σm/Sut)²).
+    Gerber,
+    /// √(σmax·σa).
+    SmithWatsonTopper,
+    /// σa/(1 − σm/σ′f).
+    Morrow,
 }
 
 /// The material of the case.
@@ -203,6 +247,10 @@ impl Default for Choices {
             finish: FatSurface::Machined,
             loading: Loading::Bending,
             fatigue_criterion: FatigueCriterion::Goodman,
+            life: false,
+            life_of: LifeOf::Cycle,
+            sn: SnFrom::Estimate,
+            mean_stress: MeanStressPick::Goodman,
         }
     }
 }
@@ -233,6 +281,25 @@ impl Choices {
         }
     }
 
+    /// Whether the life in cycles is worked out: asked for, with the fatigue check on.
+    #[must_use]
+    pub fn life_on(&self) -> bool {
+        self.fatigue && self.life
+    }
+
+    /// Whether the life uses a typed strength (the own curve's amplitudes or Morrow's σ′f),
+    /// which are in the strength unit.
+    #[must_use]
+    pub fn life_strengths(&self) -> bool {
+        self.life_on() && (self.sn == SnFrom::Own || self.mean_stress == MeanStressPick::Morrow)
+    }
+
+    /// Whether the life is of a pasted history.
+    #[must_use]
+    pub fn history_on(&self) -> bool {
+        self.life_on() && self.life_of == LifeOf::History
+    }
+
     /// Whether the section takes force and moment loads (not the thin vessels).
     #[must_use]
     pub fn has_loads(&self) -> bool {
@@ -245,7 +312,10 @@ impl Choices {
 
 /// Token tables for the choices, shared by the link writer and reader and the page's selects.
 pub mod tokens {
-    use super::{Condition, Cycle, ElasticFrom, Endurance, Layout, SectionKind, Source, Surface};
+    use super::{
+        Condition, Cycle, ElasticFrom, Endurance, Layout, LifeOf, MeanStressPick, SectionKind,
+        SnFrom, Source, Surface,
+    };
     use stresscase_core::criteria::Criterion;
     use stresscase_core::fatigue::{FatigueCriterion, Loading, Surface as FatSurface};
     use stresscase_core::section::Face;
@@ -339,6 +409,23 @@ pub mod tokens {
         (Loading::Bending, "bending"),
         (Loading::Axial, "axial"),
         (Loading::Torsion, "torsion"),
+    ];
+
+    /// `lof`: what the life is of.
+    pub const LIFE_OF: [(LifeOf, &str); 2] =
+        [(LifeOf::Cycle, "cycle"), (LifeOf::History, "history")];
+    /// `sn`: the S–N line.
+    pub const SN_FROM: [(SnFrom, &str); 3] = [
+        (SnFrom::Estimate, "estimate"),
+        (SnFrom::Fraction, "f"),
+        (SnFrom::Own, "own"),
+    ];
+    /// `msc`: the mean-stress correction.
+    pub const MEAN_STRESS: [(MeanStressPick, &str); 4] = [
+        (MeanStressPick::Goodman, "goodman"),
+        (MeanStressPick::Gerber, "gerber"),
+        (MeanStressPick::SmithWatsonTopper, "swt"),
+        (MeanStressPick::Morrow, "morrow"),
     ];
 
     /// The token of `v` in `table`.

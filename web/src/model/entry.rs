@@ -70,9 +70,58 @@ pub fn parse_number(raw: &str) -> Result<f64, EntryError> {
     }
 }
 
+/// Most values a typed load history may hold (a case link carries them all).
+pub const MAX_HISTORY: usize = 5000;
+
+/// Reads a typed load history: numbers separated by line breaks, spaces, tabs, commas or
+/// semicolons. When the text has a semicolon, semicolons and white space separate and a comma
+/// is a decimal comma (as spreadsheets write it where the comma is the decimal mark).
+///
+/// # Errors
+/// The first value that does not read (1-based), fewer than two values, or more than
+/// [`MAX_HISTORY`].
+pub fn parse_history(raw: &str) -> Result<Vec<f64>, String> {
+    let decimal_comma = raw.contains(';');
+    let is_separator = |c: char| c.is_whitespace() || c == ';' || (c == ',' && !decimal_comma);
+    let mut out = Vec::new();
+    for (i, token) in raw
+        .split(is_separator)
+        .filter(|t| !t.is_empty())
+        .enumerate()
+    {
+        if i >= MAX_HISTORY {
+            return Err(format!(
+                "more than {MAX_HISTORY} values; reduce the history to its peaks and valleys, or read it as a table"
+            ));
+        }
+        let v = parse_number(token).map_err(|e| format!("value {} ('{token}'): {e}", i + 1))?;
+        out.push(v);
+    }
+    if out.len() < 2 {
+        return Err("give at least two values: the history's peaks and valleys, in order".into());
+    }
+    Ok(out)
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    #[test]
+    fn reads_a_history_in_either_decimal_convention() {
+        assert_eq!(
+            parse_history("10, -20.5\n30 40"),
+            Ok(vec![10.0, -20.5, 30.0, 40.0])
+        );
+        assert_eq!(
+            parse_history("10;-20,5\n30;40"),
+            Ok(vec![10.0, -20.5, 30.0, 40.0])
+        );
+        assert!(parse_history("10, x").unwrap_err().contains("value 2"));
+        assert!(parse_history("10").is_err());
+        let long = "1 ".repeat(MAX_HISTORY + 1);
+        assert!(parse_history(&long).unwrap_err().contains("more than"));
+    }
 
     #[test]
     fn accepts_the_usual_forms() {

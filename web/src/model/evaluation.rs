@@ -126,8 +126,16 @@ impl Case {
             .scaled(self.unit.pascals())
             .map(|t| elastic.material.strain(&t, elastic.thermal))
             .map_err(|e| fail(Field::Sx, e))?;
-        let judgement = crate::model::judge::judge(&self.choices, self, &tensor, self.unit)
+        let mut judgement = crate::model::judge::judge(&self.choices, self, &tensor, self.unit)
             .map_err(from_source)?;
+        crate::model::judge::judge_life(
+            &mut judgement,
+            &self.choices,
+            self,
+            self.unit,
+            &self.history,
+        )
+        .map_err(|p| vec![p])?;
         let governing = crate::model::judge::governing(&self.choices, self, self.unit, &judgement)
             .map_err(from_source)?;
         let theta = self.angle_unit.to_radians(angle);

@@ -7,7 +7,8 @@
 //! point of having one.)
 
 use super::choices::{
-    Choices, Condition, Cycle, Endurance, Layout, MaterialPick, SectionKind, Source,
+    Choices, Condition, Cycle, Endurance, Layout, MaterialPick, MeanStressPick, SectionKind,
+    SnFrom, Source,
 };
 use stresscase_core::section::Face;
 use stresscase_core::AngleUnit;
@@ -88,6 +89,10 @@ pub enum Quantity {
     Millimetre,
     /// Always °C (a correlation's own unit).
     Celsius,
+    /// A number of cycles.
+    Cycles,
+    /// Hours.
+    Hours,
 }
 
 /// How a number is labelled on the page.
@@ -133,6 +138,10 @@ pub enum Place {
     SecondState,
     /// Fatigue: the endurance limit, given or estimated.
     Endurance,
+    /// Life: the S–N line and the mean-stress correction.
+    LifeLine,
+    /// Life: the history's duration.
+    LifeHistory,
 }
 
 impl Place {
@@ -367,6 +376,32 @@ inputs! {
     /// Reliability, percent.
     FatRel: "frel", "in-frel", Fixed("reliability"), Percent, "90", needed, Endurance,
         estimated_endurance;
+    // The life in cycles (judge/life.rs).
+    /// Fatigue strength fraction f at 10³ cycles, typed.
+    LifeF: "lf", "in-lf", Fixed("strength fraction f at 10³ cycles"), Ratio, "0.9", needed, LifeLine,
+        |c| c.life_on() && c.sn == SnFrom::Fraction;
+    /// Own S–N curve: the reference life.
+    SnN: "snn", "in-snn", Fixed("reference life Nref"), Cycles, "1000000", needed, LifeLine,
+        own_curve;
+    /// Own S–N curve: the fully reversed amplitude at the reference life.
+    SnS: "sns", "in-sns", Fixed("amplitude at Nref (fully reversed)"), Strength, "210", needed, LifeLine,
+        own_curve;
+    /// Own S–N curve: Basquin's slope k (N ∝ σ^−k).
+    SnK: "snk", "in-snk", Fixed("slope k (N ∝ σar^−k)"), Ratio, "8", needed, LifeLine,
+        own_curve;
+    /// Own S–N curve: its endurance limit (empty: the line goes on).
+    SnLimit: "snl", "in-snl", Fixed("endurance limit of the curve (empty: none)"), Strength, "", optional, LifeLine,
+        own_curve;
+    /// Morrow's fatigue strength coefficient σ′f.
+    SigmaF: "sfp", "in-sfp", Fixed("fatigue strength coefficient σ′f"), Strength, "900", needed, LifeLine,
+        |c| c.life_on() && c.mean_stress == MeanStressPick::Morrow;
+    /// How long the history lasts, hours (optional).
+    HistHours: "hdur", "in-hdur", Fixed("duration of the history (empty: not known)"), Hours, "", optional, LifeHistory,
+        Choices::history_on;
+}
+
+fn own_curve(c: &Choices) -> bool {
+    c.life_on() && c.sn == SnFrom::Own
 }
 
 /// The section kinds that take force and moment loads.
@@ -493,6 +528,8 @@ impl Num {
             Quantity::CaseStress => "",
             Quantity::Millimetre => "mm",
             Quantity::Celsius => "°C",
+            Quantity::Cycles => "cycles",
+            Quantity::Hours => "h",
         }
     }
 

@@ -5,9 +5,11 @@
 //! here: every number comes from `stresscase-core`.
 
 mod fatigue;
+mod life;
 mod strength;
 
 pub use fatigue::{FatigueOutcome, NOT_A_STEEL};
+pub use life::{CycleLife, HistoryOutcome, LifeOutcome, LifeResult, LineFrom};
 
 use crate::model::choices::{Choices, Source};
 use crate::model::source::{self, Numbers, SourceProblem};
@@ -76,6 +78,8 @@ pub struct Judgement {
     pub verdicts: Vec<Verdict>,
     /// The fatigue check, when on.
     pub fatigue: Option<FatigueOutcome>,
+    /// The life in cycles, when asked for (with the fatigue check on).
+    pub life: Option<LifeOutcome>,
 }
 
 impl Judgement {
@@ -165,6 +169,32 @@ pub fn judge(
         j.fatigue = Some(fatigue::evaluate(c, n, tensor, unit, &j.strengths)?);
     }
     Ok(j)
+}
+
+/// Adds the life in cycles to a judgement when the case asks for it: of the fatigue check's
+/// cycle, or of `history` (in `unit`).
+///
+/// # Errors
+/// The refused input, attached to its field.
+pub fn judge_life(
+    j: &mut Judgement,
+    c: &Choices,
+    n: &impl Numbers,
+    unit: StressUnit,
+    history: &[f64],
+) -> Result<(), crate::model::case::FieldProblem> {
+    j.life = match (&j.fatigue, c.life_on()) {
+        (Some(f), true) => Some(life::evaluate(
+            c,
+            n,
+            f,
+            j.strengths.ultimate_tensile(),
+            unit,
+            history,
+        )?),
+        _ => None,
+    };
+    Ok(())
 }
 
 #[cfg(test)]

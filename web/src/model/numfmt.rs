@@ -56,7 +56,9 @@ pub fn format_decimal_power(mantissa: f64, exponent: i32, sig: usize) -> String 
     format!("{m} × 10{}", superscript(exponent))
 }
 
-fn superscript(n: i32) -> String {
+/// `n` in superscript digits (for powers of ten).
+#[must_use]
+pub fn superscript(n: i32) -> String {
     n.to_string()
         .chars()
         .map(|c| match c {

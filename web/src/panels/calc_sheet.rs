@@ -112,6 +112,16 @@ pub fn inputs(f: &CaseForm, e: &Evaluation) -> Vec<InputLine> {
         ));
         v.push(("fatigue criterion in use".into(), fat.in_use.name().into()));
     }
+    if let Some(l) = &j.life {
+        v.push(("S–N line".into(), life_line_text(l)));
+        v.push(("mean-stress correction".into(), l.mean_stress.name().into()));
+        if let crate::model::judge::LifeResult::History(h) = &l.result {
+            v.push((
+                format!("load history ({} values, {})", h.points, f.unit.symbol()),
+                f.history.clone(),
+            ));
+        }
+    }
     v.push(line(
         f.label(Field::Angle),
         f.text(Field::Angle),
@@ -127,6 +137,51 @@ pub fn inputs(f: &CaseForm, e: &Evaluation) -> Vec<InputLine> {
         ),
     ));
     v
+}
+
+/// The life in one sentence.
+fn life_verdict(l: &crate::model::judge::LifeOutcome) -> String {
+    use crate::model::judge::LifeResult;
+    use crate::model::numfmt::format_sig;
+    use stresscase_core::damage::HistoryLife;
+    use stresscase_core::sn_curve::Life;
+    match &l.result {
+        LifeResult::Cycle(c) => match c.life {
+            Some(Life::Cycles(n)) => format!("{} cycles", format_sig(n, 3)),
+            Some(Life::Infinite) => "infinite (at or below the endurance limit)".into(),
+            Some(Life::LowCycle) => "not given (low-cycle fatigue)".into(),
+            None => c.reversed.to_string(),
+        },
+        LifeResult::History(h) => match h.life {
+            HistoryLife::Repeats(r) => format!(
+                "D = {} per history, {} repeats{}",
+                format_sig(h.miner.total, 3),
+                format_sig(r, 3),
+                h.hours
+                    .map(|t| format!(" ({} h)", format_sig(r * t, 3)))
+                    .unwrap_or_default()
+            ),
+            HistoryLife::Infinite => "infinite (no cycle does damage)".into(),
+            HistoryLife::NotGiven => "not given (some cycle is outside the S–N line)".into(),
+        },
+    }
+}
+
+/// The S–N line in words.
+fn life_line_text(l: &crate::model::judge::LifeOutcome) -> String {
+    use crate::model::judge::LineFrom;
+    use crate::model::numfmt::format_sig;
+    match l.from {
+        LineFrom::Estimated { f } => format!(
+            "through f·Sut at 10³ and Se at 10⁶ cycles, f = {} estimated (Shigley)",
+            format_sig(f, 4)
+        ),
+        LineFrom::Fraction { f } => format!(
+            "through f·Sut at 10³ and Se at 10⁶ cycles, f = {} typed",
+            format_sig(f, 4)
+        ),
+        LineFrom::Own { .. } => "the user's Basquin curve N = Nref·(σar/Sref)^−k".into(),
+    }
 }
 
 /// Every assumption that changes a number of this case, in words.
@@ -187,17 +242,27 @@ pub fn assumptions(e: &Evaluation) -> Vec<String> {
             v.push(c.to_string());
         }
     }
+    if let Some(l) = &j.life {
+        v.push(format!(
+            "Life: {} correction to a fully reversed amplitude; a compressive mean is taken as not helping (common practice); Smith–Watson–Topper with σmax ≤ 0 does no damage; below 10³ cycles (low-cycle fatigue) the S–N line gives no life.",
+            l.mean_stress.name()
+        ));
+        if matches!(l.result, crate::model::judge::LifeResult::History(_)) {
+            v.push("Load history: rainflow counting per ASTM E1049-85 §5.4.4 (three-point method from the first point; ranges left at the end are half cycles) and Miner's linear damage rule, which ignores the order of the cycles.".into());
+        }
+    }
     v
 }
 
 /// The published sources behind the checks on the sheet.
-pub const SOURCES: [&str; 7] = [
+pub const SOURCES: [&str; 8] = [
     "Principal stresses, transformation, Mohr's circles, invariants: Timoshenko & Goodier, Theory of Elasticity; Gere & Goodno, Mechanics of Materials; Malvern, Introduction to the Mechanics of a Continuous Medium.",
     "Equivalent stresses and the Lode angle: Boresi & Schmidt, Advanced Mechanics of Materials; Bai & Wierzbicki (2008).",
     "Sections and vessels: beam theory and VQ/(It) (Gere & Goodno); Saint-Venant torsion of rectangles and Lamé's thick cylinder (Timoshenko & Goodier).",
     "Rosettes and Hooke's law: Gere & Goodno; transverse sensitivity after the gauge makers' published correction.",
     "Static criteria and factors of safety: Shigley's Mechanical Engineering Design, ch. 5.",
     "Fatigue criteria, Se′ and Marin factors: Shigley's Mechanical Engineering Design, ch. 6.",
+    "Life: Shigley's Mechanical Engineering Design, 9th ed., §6-7 and §6-14 (S–N line, mean-stress corrections); ASTM E1049-85 (2017) §5.4.4 (rainflow); Miner (1945).",
     "Unit factors: NIST SP 811.",
 ];
 
@@ -264,6 +329,9 @@ pub fn SheetHead(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
                             "does not pass"
                         }
                     ));
+                }
+                if let Some(l) = &j.life {
+                    s.push_str(&format!(" Life: {}.", life_verdict(l)));
                 }
                 s
             })

@@ -9,6 +9,7 @@ pub mod element_turn;
 pub mod export_buttons;
 pub mod fatigue_check;
 pub mod headline;
+pub mod life_check;
 pub mod link_notice;
 pub mod mohr_diagram;
 pub mod number_field;

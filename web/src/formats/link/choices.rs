@@ -10,9 +10,10 @@ use stresscase_core::vessel::Ends;
 use stresscase_core::StressUnit;
 
 /// Choice keys of the source paths, in link order.
-pub(super) const CHOICE_KEYS: [&str; 25] = [
+pub(super) const CHOICE_KEYS: [&str; 29] = [
     "src", "kind", "lu", "fu", "mu", "pu", "ends", "face", "surf", "layout", "ng", "su", "tsc",
     "cond", "eu", "mat", "msu", "crit", "fat", "cyc", "sem", "fsurf", "fload", "ec", "fcrit",
+    "life", "lof", "sn", "msc",
 ];
 
 /// The choice keys a case uses, with their values, in link order.
@@ -68,7 +69,10 @@ pub(super) fn choice_pairs(c: &Choices) -> Vec<(&'static str, String)> {
             MaterialPick::Table(i) => material::TABLE.get(i).map_or("own", |m| m.key).into(),
         },
     ));
-    if c.material == MaterialPick::Own || (c.fatigue && c.endurance == Endurance::Given) {
+    if c.material == MaterialPick::Own
+        || (c.fatigue && c.endurance == Endurance::Given)
+        || c.life_strengths()
+    {
         v.push(("msu", c.strength_unit.symbol().into()));
     }
     // Written for a built-in material (absent: typed, the meaning of links before this key).
@@ -91,6 +95,15 @@ pub(super) fn choice_pairs(c: &Choices) -> Vec<(&'static str, String)> {
             "fcrit",
             tokens::token(&tokens::FATIGUE_CRITERION, c.fatigue_criterion).into(),
         ));
+        v.push(("life", if c.life { "on" } else { "off" }.into()));
+        if c.life {
+            v.push(("lof", tokens::token(&tokens::LIFE_OF, c.life_of).into()));
+            v.push(("sn", tokens::token(&tokens::SN_FROM, c.sn).into()));
+            v.push((
+                "msc",
+                tokens::token(&tokens::MEAN_STRESS, c.mean_stress).into(),
+            ));
+        }
     }
     v
 }
@@ -312,6 +325,28 @@ pub(super) fn read_choices<'a>(
             &tokens::FATIGUE_CRITERION,
             "goodman, gerber, asme, soderberg",
             d.fatigue_criterion,
+        )?,
+        life: pick(
+            "life",
+            take("life"),
+            &[(true, "on"), (false, "off")],
+            "on, off",
+            d.life,
+        )?,
+        life_of: pick(
+            "lof",
+            take("lof"),
+            &tokens::LIFE_OF,
+            "cycle, history",
+            d.life_of,
+        )?,
+        sn: pick("sn", take("sn"), &tokens::SN_FROM, "estimate, f, own", d.sn)?,
+        mean_stress: pick(
+            "msc",
+            take("msc"),
+            &tokens::MEAN_STRESS,
+            "goodman, gerber, swt, morrow",
+            d.mean_stress,
         )?,
     };
     if c.ends == Ends::PlaneStrain && c.kind == crate::model::choices::SectionKind::ThinCylinder {

@@ -63,9 +63,14 @@ fn the_longest_valid_case_fits_in_a_link() {
             fatigue: true,
             cycle: crate::model::choices::Cycle::Minimum,
             endurance: Endurance::Given,
+            life: true,
+            life_of: crate::model::choices::LifeOf::History,
+            sn: crate::model::choices::SnFrom::Own,
+            mean_stress: crate::model::choices::MeanStressPick::Morrow,
             ..Choices::default()
         };
         c.numbers = c.choices.active().into_iter().map(|n| (n, long)).collect();
+        c.history = vec![long; crate::model::entry::MAX_HISTORY];
         let link = c.to_link();
         assert!(link.len() <= MAX_LINK_LEN, "{source:?}: {}", link.len());
         assert!(
@@ -162,6 +167,7 @@ fn arb_choices() -> impl Strategy<Value = Choices> {
             0usize..4,
             0usize..3,
         ),
+        (any::<bool>(), 0usize..2, 0usize..3, 0usize..4),
     )
         .prop_map(
             |(
@@ -169,6 +175,7 @@ fn arb_choices() -> impl Strategy<Value = Choices> {
                 (ends, face, surf, layout, ng),
                 (su, tsc, cond, eu, ec, fcrit),
                 (mat, msu, crit, fat, cyc, sem, fin, load),
+                (life, lof, sn, msc),
             )| {
                 Choices {
                     source: tokens::SOURCE[src].0,
@@ -212,6 +219,10 @@ fn arb_choices() -> impl Strategy<Value = Choices> {
                     loading: tokens::LOADING[load].0,
                     elastic: tokens::ELASTIC_FROM[usize::from(ec)].0,
                     fatigue_criterion: tokens::FATIGUE_CRITERION[fcrit].0,
+                    life,
+                    life_of: tokens::LIFE_OF[lof].0,
+                    sn: tokens::SN_FROM[sn].0,
+                    mean_stress: tokens::MEAN_STRESS[msc].0,
                 }
             },
         )
@@ -279,6 +290,14 @@ fn arb_choices() -> impl Strategy<Value = Choices> {
             if !used.contains(&"fcrit") {
                 c.fatigue_criterion = d.fatigue_criterion;
             }
+            if !used.contains(&"life") {
+                c.life = d.life;
+            }
+            if !used.contains(&"lof") {
+                c.life_of = d.life_of;
+                c.sn = d.sn;
+                c.mean_stress = d.mean_stress;
+            }
             if c.kind == crate::model::choices::SectionKind::ThinCylinder {
                 c.ends = Ends::Closed;
             }
@@ -301,11 +320,20 @@ fn arb_case() -> impl Strategy<Value = Case> {
             prop::array::uniform3(arb_num()),
             any::<bool>(),
         ),
-        (arb_choices(), prop::collection::vec(arb_num(), 64)),
+        (
+            arb_choices(),
+            prop::collection::vec(arb_num(), 80),
+            prop::collection::vec(arb_num(), 2..40),
+        ),
     )
         .prop_filter_map(
             "non-zero normal",
-            |((title, note, full, u), mut stress, (angle, rad, normal, up), (choices, nums))| {
+            |(
+                (title, note, full, u),
+                mut stress,
+                (angle, rad, normal, up),
+                (choices, nums, history),
+            )| {
                 if normal == [0.0; 3] {
                     return None;
                 }
@@ -344,6 +372,11 @@ fn arb_case() -> impl Strategy<Value = Case> {
                     },
                     choices,
                     numbers,
+                    history: if choices.history_on() {
+                        history
+                    } else {
+                        Vec::new()
+                    },
                 })
             },
         )

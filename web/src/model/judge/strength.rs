@@ -109,5 +109,6 @@ pub fn evaluate(
         required,
         verdicts,
         fatigue: None,
+        life: None,
     })
 }
