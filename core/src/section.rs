@@ -137,6 +137,45 @@ pub struct Loads {
     pub vz: f64,
 }
 
+impl Loads {
+    /// The sum of two sets of loads (a steady and an alternating part make the peak).
+    #[must_use]
+    pub fn plus(&self, o: &Loads) -> Loads {
+        Loads {
+            n: self.n + o.n,
+            my: self.my + o.my,
+            mz: self.mz + o.mz,
+            t: self.t + o.t,
+            vy: self.vy + o.vy,
+            vz: self.vz + o.vz,
+        }
+    }
+
+    /// A rotating round shaft's cycle at the perimeter angle `phi` (radians): the steady part
+    /// (axial force and torque) and the fully reversed part, the resultant moment
+    /// M = √(My² + Mz²) turned so that its bending stress peaks in tension at `phi`.
+    ///
+    /// On a round section σ = (My·sin φ − Mz·cos φ)·r/I (module sign conventions), so
+    /// My′ = M·sin φ and Mz′ = −M·cos φ give σ = +M·r/I at φ. Transverse shear is left out of
+    /// both parts: it rotates with the bending and is zero at the fibre where bending peaks
+    /// (Jourawski), as in Shigley's shaft design (ch. 7, from memory).
+    #[must_use]
+    pub fn rotating_at(&self, phi: f64) -> (Loads, Loads) {
+        let m = crate::fmath::hypot(self.my, self.mz);
+        let steady = Loads {
+            n: self.n,
+            t: self.t,
+            ..Loads::default()
+        };
+        let alternating = Loads {
+            my: m * crate::fmath::sin(phi),
+            mz: -m * crate::fmath::cos(phi),
+            ..Loads::default()
+        };
+        (steady, alternating)
+    }
+}
+
 /// Pressure on a round section's surfaces, positive pushing on the surface.
 #[derive(Debug, Clone, Copy, PartialEq)]
 #[cfg_attr(feature = "serde", derive(Serialize, Deserialize))]
@@ -305,6 +344,37 @@ mod tests {
         Location::Round {
             phi,
             r: s.outer_radius(),
+        }
+    }
+
+    #[test]
+    fn a_rotating_shaft_peaks_in_tension_at_the_point() {
+        // σ = M·c/I = 32M/(πd³) at the outer fibre (beam formula), at any φ.
+        let s = Round::solid(0.05).unwrap();
+        let l = Loads {
+            n: 1e3,
+            my: 300.0,
+            mz: -400.0,
+            t: 250.0,
+            vy: 5e3,
+            vz: 0.0,
+        };
+        for phi in [0.0, 0.7, PI / 2.0, 3.0, 5.5] {
+            let (steady, alt) = l.rotating_at(phi);
+            assert_eq!(
+                (steady.n, steady.t, steady.my, steady.vy),
+                (1e3, 250.0, 0.0, 0.0)
+            );
+            let t = Section::Round(s)
+                .stress_at(
+                    &alt,
+                    &Pressure::NONE,
+                    Concentration::default(),
+                    outer(&s, phi),
+                )
+                .unwrap();
+            let want = 32.0 * 500.0 / (PI * 0.05f64.powi(3));
+            assert!((t.components()[0] - want).abs() < 1e-9 * want, "φ = {phi}");
         }
     }
 

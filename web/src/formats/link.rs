@@ -349,7 +349,10 @@ impl Case {
                 }
                 // Elastic constants and the required factor came after the first v1 links:
                 // absent means the defaults.
-                (None, true) if ELASTIC.contains(&n) || n == Num::Required => {
+                // So did the notch sensitivities: absent means 1 (Kf = Kt, the meaning then).
+                (None, true)
+                    if ELASTIC.contains(&n) || matches!(n, Num::Required | Num::Q | Num::Qs) =>
+                {
                     numbers.insert(n, n.demo_text().parse().unwrap_or(0.0));
                 }
                 (None, true) if n.is_optional() => {}

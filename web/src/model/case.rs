@@ -424,12 +424,12 @@ impl CaseForm {
     /// minimum in one mode and the amplitude in the other, so it is cleared (and asked for again)
     /// whenever the meaning changes: the same numbers are never re-read with a new meaning.
     pub fn set_cycle(&mut self, to: Cycle) {
-        if to != self.choices.cycle {
+        let from = self.choices.cycle;
+        if self.choices.set_cycle_kind(to) && to != from {
             for i in 0..6 {
                 self.nums.insert(Num::second(i), String::new());
             }
         }
-        self.choices.cycle = to;
     }
 
     /// Chooses where E, ν and α come from. Switching to typed values starts from the chosen

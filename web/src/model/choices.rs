@@ -150,6 +150,14 @@ pub struct Choices {
     pub sn: SnFrom,
     /// The mean-stress correction to a fully reversed amplitude.
     pub mean_stress: MeanStressPick,
+    /// Section loads cycle on a rotating shaft: bending (and transverse shear) fully reversed,
+    /// torque, axial force and pressure steady.
+    pub rotating: bool,
+    /// Where q and qs come from.
+    pub notch_q: NotchQ,
+    /// Whether Kt and Kts raise the static state on screen (common practice: not for a ductile
+    /// material; the default keeps the meaning of links written before this choice).
+    pub static_kt: bool,
 }
 
 /// What the life is worked out for.
@@ -207,6 +215,19 @@ pub enum Cycle {
     Minimum,
     /// The state on screen is the mean; the alternating amplitude is typed or taken.
     Alternating,
+    /// Loads on a section: the loads typed are the steady part, alternating loads are typed
+    /// beside them (or, on a rotating shaft, the bending is fully reversed).
+    Loads,
+}
+
+/// Where the notch sensitivities q and qs come from (section loads in fatigue).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum NotchQ {
+    /// Typed (1 means the full Kt: Kf = Kt, the meaning before notch sensitivity existed).
+    #[default]
+    Typed,
+    /// Neuber's equation with the published fit of √a against Sut and the notch radius.
+    Neuber,
 }
 
 /// Where the endurance limit comes from.
@@ -251,6 +272,9 @@ impl Default for Choices {
             life_of: LifeOf::Cycle,
             sn: SnFrom::Estimate,
             mean_stress: MeanStressPick::Goodman,
+            rotating: false,
+            notch_q: NotchQ::Typed,
+            static_kt: true,
         }
     }
 }
@@ -278,6 +302,51 @@ impl Choices {
         match self.layout {
             Layout::Rectangular | Layout::Delta => 3,
             Layout::Custom => self.gauges.clamp(3, MAX_GAUGES),
+        }
+    }
+
+    /// Whether the path is a section that takes loads (so its loads may cycle).
+    #[must_use]
+    pub fn section_with_loads(&self) -> bool {
+        self.source == Source::Section && self.has_loads()
+    }
+
+    /// Whether the fatigue check takes its states from the section's loads through Kf and
+    /// Kfs (fatigue on, a section with loads).
+    #[must_use]
+    pub fn notch_fatigue(&self) -> bool {
+        self.fatigue && self.section_with_loads()
+    }
+
+    /// Whether the cycle is of the section's steady and alternating loads.
+    #[must_use]
+    pub fn loads_cycle(&self) -> bool {
+        self.notch_fatigue() && self.cycle == Cycle::Loads
+    }
+
+    /// Whether the loads cycle is a rotating shaft's (round sections only).
+    #[must_use]
+    pub fn rotating_shaft(&self) -> bool {
+        self.loads_cycle()
+            && self.rotating
+            && matches!(self.kind, SectionKind::SolidRound | SectionKind::Tube)
+    }
+
+    /// Sets a cycle kind the path allows (a loads cycle needs a section with loads); returns
+    /// whether it was set.
+    pub fn set_cycle_kind(&mut self, to: Cycle) -> bool {
+        if to == Cycle::Loads && !self.section_with_loads() {
+            return false;
+        }
+        self.cycle = to;
+        true
+    }
+
+    /// After a change of path or section kind: a loads cycle without a section with loads
+    /// falls back to the ratio cycle.
+    pub fn keep_cycle_valid(&mut self) {
+        if self.cycle == Cycle::Loads && !self.section_with_loads() {
+            self.cycle = Cycle::Ratio;
         }
     }
 
@@ -313,8 +382,8 @@ impl Choices {
 /// Token tables for the choices, shared by the link writer and reader and the page's selects.
 pub mod tokens {
     use super::{
-        Condition, Cycle, ElasticFrom, Endurance, Layout, LifeOf, MeanStressPick, SectionKind,
-        SnFrom, Source, Surface,
+        Condition, Cycle, ElasticFrom, Endurance, Layout, LifeOf, MeanStressPick, NotchQ,
+        SectionKind, SnFrom, Source, Surface,
     };
     use stresscase_core::criteria::Criterion;
     use stresscase_core::fatigue::{FatigueCriterion, Loading, Surface as FatSurface};
@@ -387,11 +456,14 @@ pub mod tokens {
         (Some(Criterion::ModifiedMohr), "mm"),
     ];
     /// `cyc`.
-    pub const CYCLE: [(Cycle, &str); 3] = [
+    pub const CYCLE: [(Cycle, &str); 4] = [
         (Cycle::Ratio, "ratio"),
         (Cycle::Minimum, "min"),
         (Cycle::Alternating, "alt"),
+        (Cycle::Loads, "loads"),
     ];
+    /// `nq`: where q and qs come from.
+    pub const NOTCH_Q: [(NotchQ, &str); 2] = [(NotchQ::Typed, "typed"), (NotchQ::Neuber, "neuber")];
     /// `sem`.
     pub const ENDURANCE: [(Endurance, &str); 2] = [
         (Endurance::Estimate, "estimate"),

@@ -126,8 +126,9 @@ impl Case {
             .scaled(self.unit.pascals())
             .map(|t| elastic.material.strain(&t, elastic.thermal))
             .map_err(|e| fail(Field::Sx, e))?;
-        let mut judgement = crate::model::judge::judge(&self.choices, self, &tensor, self.unit)
-            .map_err(from_source)?;
+        let mut judgement =
+            crate::model::judge::judge(&self.choices, self, &tensor, (self.unit, self.angle_unit))
+                .map_err(from_source)?;
         crate::model::judge::judge_life(
             &mut judgement,
             &self.choices,

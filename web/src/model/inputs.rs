@@ -7,8 +7,8 @@
 //! point of having one.)
 
 use super::choices::{
-    Choices, Condition, Cycle, Endurance, Layout, MaterialPick, MeanStressPick, SectionKind,
-    SnFrom, Source,
+    Choices, Condition, Cycle, Endurance, Layout, MaterialPick, MeanStressPick, NotchQ,
+    SectionKind, SnFrom, Source,
 };
 use stresscase_core::section::Face;
 use stresscase_core::AngleUnit;
@@ -138,6 +138,10 @@ pub enum Place {
     SecondState,
     /// Fatigue: the endurance limit, given or estimated.
     Endurance,
+    /// Fatigue: the alternating loads of a section.
+    AltLoads,
+    /// Fatigue: the notch sensitivity of a section's notch.
+    Notch,
     /// Life: the S–N line and the mean-stress correction.
     LifeLine,
     /// Life: the history's duration.
@@ -376,6 +380,34 @@ inputs! {
     /// Reliability, percent.
     FatRel: "frel", "in-frel", Fixed("reliability"), Percent, "90", needed, Endurance,
         estimated_endurance;
+    // Section loads that cycle, and the notch in fatigue (judge/fatigue.rs, source/section.rs).
+    /// Alternating axial force.
+    Na: "Na", "in-load-na", Fixed("axial force Na, alternating"), Force, "0", needed, AltLoads,
+        alternating_loads;
+    /// Alternating bending moment about y.
+    Mya: "Mya", "in-load-mya", Fixed("bending moment Mya, alternating"), Moment, "0", needed, AltLoads,
+        alternating_loads;
+    /// Alternating bending moment about z.
+    Mza: "Mza", "in-load-mza", Fixed("bending moment Mza, alternating"), Moment, "380", needed, AltLoads,
+        alternating_loads;
+    /// Alternating torque.
+    Ta: "Ta", "in-load-ta", Fixed("torque Ta, alternating"), Moment, "0", needed, AltLoads,
+        alternating_loads;
+    /// Alternating shear force along y.
+    Vya: "Vya", "in-load-vya", Fixed("shear force Vya, alternating"), Force, "0", needed, AltLoads,
+        alternating_loads;
+    /// Alternating shear force along z.
+    Vza: "Vza", "in-load-vza", Fixed("shear force Vza, alternating"), Force, "0", needed, AltLoads,
+        alternating_loads;
+    /// Notch sensitivity q for normal stress, typed.
+    Q: "q", "in-q", Fixed("notch sensitivity q (normal)"), Ratio, "1", needed, Notch,
+        |c| c.notch_fatigue() && c.notch_q == NotchQ::Typed;
+    /// Notch sensitivity qs for shear stress, typed.
+    Qs: "qs", "in-qs", Fixed("notch sensitivity qs (shear)"), Ratio, "1", needed, Notch,
+        |c| c.notch_fatigue() && c.notch_q == NotchQ::Typed;
+    /// Notch root radius, for Neuber's equation.
+    NotchR: "nr", "in-nr", Fixed("notch root radius r"), Length, "2", needed, Notch,
+        |c| c.notch_fatigue() && c.notch_q == NotchQ::Neuber;
     // The life in cycles (judge/life.rs).
     /// Fatigue strength fraction f at 10³ cycles, typed.
     LifeF: "lf", "in-lf", Fixed("strength fraction f at 10³ cycles"), Ratio, "0.9", needed, LifeLine,
@@ -398,6 +430,10 @@ inputs! {
     /// How long the history lasts, hours (optional).
     HistHours: "hdur", "in-hdur", Fixed("duration of the history (empty: not known)"), Hours, "", optional, LifeHistory,
         Choices::history_on;
+}
+
+fn alternating_loads(c: &Choices) -> bool {
+    c.loads_cycle() && !c.rotating_shaft()
 }
 
 fn own_curve(c: &Choices) -> bool {
@@ -430,7 +466,7 @@ fn own_material(c: &Choices) -> bool {
 }
 
 fn second_state(c: &Choices) -> bool {
-    c.fatigue && c.cycle != Cycle::Ratio
+    c.fatigue && matches!(c.cycle, Cycle::Minimum | Cycle::Alternating)
 }
 
 fn estimated_endurance(c: &Choices) -> bool {

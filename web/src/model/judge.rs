@@ -8,7 +8,7 @@ mod fatigue;
 mod life;
 mod strength;
 
-pub use fatigue::{FatigueOutcome, NOT_A_STEEL};
+pub use fatigue::{FatigueOutcome, NotchFactors, NOT_A_STEEL};
 pub use life::{CycleLife, HistoryOutcome, LifeOutcome, LifeResult, LineFrom};
 
 use crate::model::choices::{Choices, Source};
@@ -17,7 +17,7 @@ use stresscase_core::criteria::{self, Criterion, Verdict};
 use stresscase_core::invariants::mean_stress;
 use stresscase_core::material::{Basis, Strengths};
 use stresscase_core::section::{Critical, Rank};
-use stresscase_core::{principal_values, StressTensor, StressUnit};
+use stresscase_core::{principal_values, AngleUnit, StressTensor, StressUnit};
 
 /// Where on a section the decision is hardest: the lowest static factor under the criterion in
 /// use and, with a proportional fatigue cycle, the lowest fatigue factor. Positions as in the
@@ -162,11 +162,17 @@ pub fn judge(
     c: &Choices,
     n: &impl Numbers,
     tensor: &StressTensor,
-    unit: StressUnit,
+    (unit, angle): (StressUnit, AngleUnit),
 ) -> Result<Judgement, SourceProblem> {
     let mut j = strength::evaluate(c, n, tensor, unit)?;
     if c.fatigue {
-        j.fatigue = Some(fatigue::evaluate(c, n, tensor, unit, &j.strengths)?);
+        j.fatigue = Some(fatigue::evaluate(
+            c,
+            n,
+            tensor,
+            (unit, angle),
+            &j.strengths,
+        )?);
     }
     Ok(j)
 }
@@ -208,13 +214,19 @@ mod tests {
     fn a_table_material_is_judged_in_the_case_unit() {
         let c = Choices::default(); // AISI 1020 hot-rolled, Sy = 210 MPa
         let t = StressTensor::plane(105.0, 0.0, 0.0).unwrap();
-        let j = judge(&c, &demo(&c), &t, StressUnit::MPa).unwrap();
+        let j = judge(&c, &demo(&c), &t, (StressUnit::MPa, AngleUnit::Degree)).unwrap();
         let vm = j.in_use_verdict().unwrap();
         assert_eq!(vm.criterion, Criterion::VonMises);
         assert!((vm.factor.unwrap() - 2.0).abs() < 1e-12);
         // The same state in ksi gives the same factor.
         let k = StressUnit::MPa.convert(1.0, StressUnit::Ksi);
-        let j2 = judge(&c, &demo(&c), &t.scaled(k).unwrap(), StressUnit::Ksi).unwrap();
+        let j2 = judge(
+            &c,
+            &demo(&c),
+            &t.scaled(k).unwrap(),
+            (StressUnit::Ksi, AngleUnit::Degree),
+        )
+        .unwrap();
         assert!((j2.in_use_verdict().unwrap().factor.unwrap() - 2.0).abs() < 1e-9);
     }
 
@@ -228,14 +240,16 @@ mod tests {
         n.0.insert(Num::MatSut, -5.0);
         let t = StressTensor::plane(10.0, 0.0, 0.0).unwrap();
         assert_eq!(
-            judge(&c, &n, &t, StressUnit::MPa).unwrap_err().num,
+            judge(&c, &n, &t, (StressUnit::MPa, AngleUnit::Degree))
+                .unwrap_err()
+                .num,
             Num::MatSut
         );
         n.0.insert(Num::MatSut, 200.0);
         n.0.remove(&Num::MatSy);
         n.0.insert(Num::MatElong, 0.5);
         n.0.insert(Num::MatSuc, 150.0);
-        let e = judge(&c, &n, &t, StressUnit::MPa).unwrap_err();
+        let e = judge(&c, &n, &t, (StressUnit::MPa, AngleUnit::Degree)).unwrap_err();
         assert_eq!(e.num, Num::MatSuc);
         assert!(e.message.contains("compressive"), "{}", e.message);
     }
@@ -247,7 +261,7 @@ mod tests {
             ..Choices::default()
         };
         let t = StressTensor::plane(80.0, 0.0, 30.0).unwrap();
-        let j = judge(&c, &demo(&c), &t, StressUnit::MPa).unwrap();
+        let j = judge(&c, &demo(&c), &t, (StressUnit::MPa, AngleUnit::Degree)).unwrap();
         let f = j.fatigue.unwrap();
         assert!(f.sm.abs() < 1e-12);
         let goodman = f.factors[0].1.unwrap();
@@ -305,7 +319,7 @@ mod tests {
         let (t, _) = source::evaluate(&c, &n, StressUnit::MPa, stresscase_core::AngleUnit::Degree)
             .unwrap()
             .unwrap();
-        let j = judge(&c, &n, &t, StressUnit::MPa).unwrap();
+        let j = judge(&c, &n, &t, (StressUnit::MPa, AngleUnit::Degree)).unwrap();
         let g = governing(&c, &n, StressUnit::MPa, &j).unwrap().unwrap();
         let tensile = |crit: &Critical| {
             let stresscase_core::section::Location::Round { phi, .. } = crit.at else {
@@ -319,5 +333,95 @@ mod tests {
         assert!(tensile(&s) && tensile(&f), "{s:?} {f:?}");
         assert!(nf.unwrap() < 2.0 && ns.unwrap() > 2.0);
         assert!(tensile(g.decision().unwrap()));
+    }
+
+    /// A solid shaft with the demo's numbers and these loads, fatigue on.
+    fn shaft(c: Choices, loads: &[(Num, f64)]) -> (Judgement, StressTensor) {
+        let mut n = demo(&c);
+        for &(k, v) in loads {
+            n.0.insert(k, v);
+        }
+        let (t, _) = source::evaluate(&c, &n, StressUnit::MPa, AngleUnit::Degree)
+            .unwrap()
+            .unwrap();
+        (
+            judge(&c, &n, &t, (StressUnit::MPa, AngleUnit::Degree)).unwrap(),
+            t,
+        )
+    }
+
+    #[test]
+    fn a_rotating_shaft_reverses_its_bending_and_keeps_its_torque() {
+        use crate::model::choices::{Cycle, NotchQ};
+        // Ø40 mm, Mz = 380 N·m, T = 520 N·m, φ = 90° (on the neutral axis of Mz: the turned
+        // moment must still peak there). σ = 32M/(πd³), τ = 16T/(πd³) (beam and torsion
+        // formulas), times Kf and Kfs with q typed.
+        let c = Choices {
+            source: Source::Section,
+            fatigue: true,
+            cycle: Cycle::Loads,
+            rotating: true,
+            notch_q: NotchQ::Typed,
+            ..Choices::default()
+        };
+        let loads = [
+            (Num::N, 0.0),
+            (Num::Vy, 0.0),
+            (Num::Phi, 90.0),
+            (Num::Kt, 2.0),
+            (Num::Kts, 1.5),
+            (Num::Q, 0.8),
+            (Num::Qs, 0.9),
+        ];
+        let (j, on_screen) = shaft(c, &loads);
+        let f = j.fatigue.unwrap();
+        let d3 = std::f64::consts::PI * 0.04f64.powi(3);
+        let (kf, kfs) = (1.0 + 0.8 * 1.0, 1.0 + 0.9 * 0.5);
+        let sigma = 32.0 * 380.0 / d3 / 1e6;
+        let tau = 16.0 * 520.0 / d3 / 1e6;
+        let nf = f.notch.unwrap();
+        assert!((nf.kf - kf).abs() < 1e-12 && (nf.kfs - kfs).abs() < 1e-12);
+        let [ax, ay, az, axy, ayz, azx] = f.cycle.alternating.components();
+        assert!(
+            (ax - kf * sigma).abs() < 1e-9 * sigma,
+            "{ax} vs {}",
+            kf * sigma
+        );
+        assert_eq!([ay, az, axy, ayz, azx], [0.0; 5]);
+        let [mx, _, _, mxy, _, _] = f.cycle.mean.components();
+        assert!(mx.abs() < 1e-9 && (mxy - kfs * tau).abs() < 1e-9 * tau);
+        assert!(f.ratio.is_none());
+        // The state on screen is the peak with Kt and Kts (applied statically by default).
+        let [sx, _, _, txy, _, _] = on_screen.components();
+        assert!((sx - 2.0 * sigma).abs() < 1e-9 * sigma && (txy - 1.5 * tau).abs() < 1e-9 * tau);
+    }
+
+    #[test]
+    fn typed_alternating_loads_and_no_static_kt() {
+        use crate::model::choices::Cycle;
+        let c = Choices {
+            source: Source::Section,
+            fatigue: true,
+            cycle: Cycle::Loads,
+            static_kt: false,
+            ..Choices::default()
+        };
+        let loads = [
+            (Num::N, 0.0),
+            (Num::Vy, 0.0),
+            (Num::Phi, 180.0),
+            (Num::Mz, 200.0),
+            (Num::Mza, 150.0),
+            (Num::T, 0.0),
+            (Num::Kt, 1.8),
+        ];
+        let (j, on_screen) = shaft(c, &loads);
+        let f = j.fatigue.unwrap();
+        let d3 = std::f64::consts::PI * 0.04f64.powi(3);
+        let s = |m: f64| 32.0 * m / d3 / 1e6;
+        // q = 1 by default: Kf = Kt on the fatigue states; the state on screen has no Kt.
+        assert!((f.cycle.mean.components()[0] - 1.8 * s(200.0)).abs() < 1e-9 * s(200.0));
+        assert!((f.cycle.alternating.components()[0] - 1.8 * s(150.0)).abs() < 1e-9 * s(150.0));
+        assert!((on_screen.components()[0] - s(350.0)).abs() < 1e-9 * s(350.0));
     }
 }

@@ -11,6 +11,8 @@ use stresscase_core::{AngleUnit, StressTensor, StressUnit};
 
 mod rosette;
 mod section;
+
+pub use section::fatigue_states;
 mod strain;
 
 pub use rosette::RosetteOutcome;

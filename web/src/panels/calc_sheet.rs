@@ -101,6 +101,10 @@ pub fn inputs(f: &CaseForm, e: &Evaluation) -> Vec<InputLine> {
             Cycle::Ratio => "proportional: minimum = R × the state on screen",
             Cycle::Minimum => "the state on screen is the maximum; the minimum as given",
             Cycle::Alternating => "the state on screen is the mean; the amplitude as given",
+            Cycle::Loads if f.choices.rotating_shaft() => {
+                "rotating shaft: bending fully reversed, axial force, torque and pressure steady"
+            }
+            Cycle::Loads => "loads on the section: steady loads and alternating loads as given",
         };
         v.push(("fatigue cycle".into(), cycle.into()));
         v.push((
@@ -241,6 +245,24 @@ pub fn assumptions(e: &Evaluation) -> Vec<String> {
         if let Some(c) = f.caution {
             v.push(c.to_string());
         }
+        if let Some(nf) = f.notch {
+            use crate::model::numfmt::format_sig;
+            v.push(format!(
+                "Notch in fatigue (common practice): the section's states use Kf = 1 + q(Kt − 1) = {} and Kfs = 1 + qs(Kts − 1) = {} (q = {}, qs = {}{}).",
+                format_sig(nf.kf, 4),
+                format_sig(nf.kfs, 4),
+                format_sig(nf.q, 3),
+                format_sig(nf.qs, 3),
+                if nf.neuber.is_some() { ", Neuber's equation with Shigley's fit of √a against Sut" } else { ", typed" }
+            ));
+        }
+    }
+    if e.choices.source == crate::model::choices::Source::Section && e.choices.has_loads() {
+        v.push(if e.choices.static_kt {
+            "Kt and Kts raise the state on screen and the static check.".into()
+        } else {
+            "Kt and Kts are not applied to the state on screen or the static check (common practice for a ductile material, which yields locally at the notch).".into()
+        });
     }
     if let Some(l) = &j.life {
         v.push(format!(

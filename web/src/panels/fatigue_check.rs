@@ -4,7 +4,7 @@
 //! its load line.
 
 use crate::model::case::{CaseForm, Field};
-use crate::model::choices::{tokens, Cycle, Endurance};
+use crate::model::choices::{tokens, Cycle, Endurance, SectionKind};
 use crate::model::evaluation::Evaluation;
 use crate::model::inputs::{Num, Place};
 use crate::model::judge::{FatigueOutcome, Judgement};
@@ -167,6 +167,18 @@ pub fn FatigueCheck(
                     row("fat_sm", "mean equivalent σm,eq (von Mises, sign of I1)".into(), f.sm, u),
                     row("fat_se", "endurance limit Se used".into(), f.se, u),
                 ];
+                if let Some(nf) = f.notch {
+                    v.push(row("fat_kt", "Kt of the section (normal)".into(), nf.kt, "(ratio)"));
+                    v.push(row("fat_kts", "Kts of the section (shear)".into(), nf.kts, "(ratio)"));
+                    if let Some((a, a_s)) = nf.neuber {
+                        v.push(row("fat_sqrt_a", "Neuber's √a (bending, axial) from Sut (Shigley eq. 6-35a)".into(), a, "√mm"));
+                        v.push(row("fat_sqrt_as", "Neuber's √a (torsion) from Sut (eq. 6-35b)".into(), a_s, "√mm"));
+                    }
+                    v.push(row("fat_q", "notch sensitivity q = 1/(1 + √a/√r)".into(), nf.q, "(ratio)"));
+                    v.push(row("fat_qs", "notch sensitivity qs".into(), nf.qs, "(ratio)"));
+                    v.push(row("fat_kf", "Kf = 1 + q(Kt − 1), on normal stresses".into(), nf.kf, "(ratio)"));
+                    v.push(row("fat_kfs", "Kfs = 1 + qs(Kts − 1), on shear stresses".into(), nf.kfs, "(ratio)"));
+                }
                 if let Some((se0, m)) = f.estimate {
                     v.push(row("fat_se0", "Se′ = 0.5·Sut (steels, Sut ≤ 1400 MPa)".into(), se0, u));
                     v.push(row("fat_ka", "ka surface".into(), m.ka, "(ratio)"));
@@ -250,11 +262,28 @@ pub fn FatigueCheck(
             <div class="verdict-grid" hidden=move || !on.get()>
                 <div class="verdict-inputs">
                     <ChoiceSelect form=form id="cycle-kind" label="Cycle"
-                        options=vec![("ratio", "the state on screen is the maximum; minimum = R × maximum"), ("min", "the state on screen is the maximum; the minimum below"), ("alt", "the state on screen is the mean; the alternating amplitude below")]
+                        options=vec![("ratio", "the state on screen is the maximum; minimum = R × maximum"), ("min", "the state on screen is the maximum; the minimum below"), ("alt", "the state on screen is the mean; the alternating amplitude below"), ("loads", "loads on a section: steady loads, and alternating loads below")]
                         get=|f| tokens::token(&tokens::CYCLE, f.choices.cycle)
                         set=|f, v| if let Some(c) = tokens::value(&tokens::CYCLE, v) { f.set_cycle(c); }/>
+                    <p class="hint" id="loads-cycle-hint" hidden=move || form.with(|f| f.choices.section_with_loads())>"A cycle of loads is for loads on a shaft, tube or rectangle."</p>
                     <SourceFields form=form place=Place::CycleRatio/>
-                    <div hidden=move || form.with(|f| f.choices.cycle == Cycle::Ratio)>
+                    <div hidden=move || !form.with(|f| f.choices.loads_cycle())>
+                        <label class="check" hidden=move || !form.with(|f| matches!(f.choices.kind, SectionKind::SolidRound | SectionKind::Tube))>
+                            <input type="checkbox" id="rotating-shaft" prop:checked=move || form.with(|f| f.choices.rotating)
+                                on:change:target=move |ev| form.update(|f| f.choices.rotating = ev.target().checked())/>
+                            " rotating shaft: bending fully reversed, axial force, torque and pressure steady"
+                        </label>
+                        <SourceFields form=form place=Place::AltLoads/>
+                        <p class="hint">"The loads in the section panel are the steady part; the state on screen and the static check are the peak (steady + alternating). On a rotating shaft the resultant bending moment is taken fully reversed at the point."</p>
+                    </div>
+                    <div hidden=move || !form.with(|f| f.choices.notch_fatigue())>
+                        <ChoiceSelect form=form id="notch-q" label="Notch sensitivity"
+                            options=vec![("typed", "q and qs typed (1: Kf = Kt, the safe side)"), ("neuber", "Neuber's equation from Sut and the notch radius (steels)")]
+                            get=|f| tokens::token(&tokens::NOTCH_Q, f.choices.notch_q)
+                            set=|f, v| if let Some(x) = tokens::value(&tokens::NOTCH_Q, v) { f.choices.notch_q = x; }/>
+                        <SourceFields form=form place=Place::Notch/>
+                    </div>
+                    <div hidden=move || form.with(|f| !matches!(f.choices.cycle, Cycle::Minimum | Cycle::Alternating))>
                         <SourceFields form=form place=Place::SecondState/>
                         <div class="buttons">
                             <button type="button" id="take-second" on:click=move |_| shown.with_untracked(|e| if let Some(e) = e { form.update(|f| take_second(f, e)); })>"Take the state on screen"</button>

@@ -69,6 +69,7 @@ pub fn SectionLoads(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                         get=|f| tokens::token(&tokens::KIND, f.choices.kind)
                         set=|f, v| if let Some(k) = tokens::value(&tokens::KIND, v) {
                             f.choices.kind = k;
+                            f.choices.keep_cycle_valid();
                             // Thin cylinders have closed or open ends only.
                             if k == SectionKind::ThinCylinder && f.choices.ends == Ends::PlaneStrain {
                                 f.choices.ends = Ends::Closed;
@@ -121,7 +122,12 @@ pub fn SectionLoads(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                     {(!thin).then(|| view! {
                         <h3>"Stress concentration at the point"</h3>
                         <SourceFields form=form place=Place::Concentration/>
-                        <p class="hint">"Kt multiplies σx from N, My, Mz; Kts the shear from T, Vy, Vz. Pressure stresses are not multiplied. Use 1 away from notches."</p>
+                        <label class="check">
+                            <input type="checkbox" id="static-kt" prop:checked=move || form.with(|f| f.choices.static_kt)
+                                on:change:target=move |ev| form.update(|f| f.choices.static_kt = ev.target().checked())/>
+                            " apply Kt and Kts to the state on screen and the static check"
+                        </label>
+                        <p class="hint">"Kt multiplies σx from N, My, Mz; Kts the shear from T, Vy, Vz. Pressure stresses are not multiplied. Use 1 away from notches. Common practice applies Kt statically to brittle materials only: a ductile material yields locally and the peak is relieved. In fatigue the section uses Kf = 1 + q(Kt − 1) and Kfs = 1 + qs(Kts − 1) (see Fatigue)."</p>
                     })}
                     <h3>"The point"</h3>
                     {(k == SectionKind::Rectangle).then(|| view! {

@@ -18,6 +18,7 @@ fn switch(form: &mut CaseForm, to: Source, shown: Option<&Evaluation>) {
         }
     }
     form.choices.source = to;
+    form.choices.keep_cycle_valid();
 }
 
 /// The radio group.

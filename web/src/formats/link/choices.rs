@@ -3,17 +3,19 @@
 //! refused).
 
 use super::LinkError;
-use crate::model::choices::{tokens, Choices, Endurance, Layout, MaterialPick, Source, MAX_GAUGES};
+use crate::model::choices::{
+    tokens, Choices, Cycle, Endurance, Layout, MaterialPick, NotchQ, Source, MAX_GAUGES,
+};
 use stresscase_core::material;
 use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
 use stresscase_core::vessel::Ends;
 use stresscase_core::StressUnit;
 
 /// Choice keys of the source paths, in link order.
-pub(super) const CHOICE_KEYS: [&str; 29] = [
+pub(super) const CHOICE_KEYS: [&str; 32] = [
     "src", "kind", "lu", "fu", "mu", "pu", "ends", "face", "surf", "layout", "ng", "su", "tsc",
     "cond", "eu", "mat", "msu", "crit", "fat", "cyc", "sem", "fsurf", "fload", "ec", "fcrit",
-    "life", "lof", "sn", "msc",
+    "life", "lof", "sn", "msc", "rot", "nq", "skt",
 ];
 
 /// The choice keys a case uses, with their values, in link order.
@@ -41,6 +43,10 @@ pub(super) fn choice_pairs(c: &Choices) -> Vec<(&'static str, String)> {
             }
             if matches!(c.kind, K::ThinCylinder | K::ThinSphere) {
                 v.push(("surf", tokens::token(&tokens::SURFACE, c.surface).into()));
+            }
+            // Written only when off: absent means on, the meaning of links before it.
+            if c.has_loads() && !c.static_kt {
+                v.push(("skt", "off".into()));
             }
         }
         Source::Rosette => {
@@ -95,6 +101,12 @@ pub(super) fn choice_pairs(c: &Choices) -> Vec<(&'static str, String)> {
             "fcrit",
             tokens::token(&tokens::FATIGUE_CRITERION, c.fatigue_criterion).into(),
         ));
+        if c.rotating_shaft() {
+            v.push(("rot", "on".into()));
+        }
+        if c.notch_fatigue() && c.notch_q != NotchQ::Typed {
+            v.push(("nq", tokens::token(&tokens::NOTCH_Q, c.notch_q).into()));
+        }
         v.push(("life", if c.life { "on" } else { "off" }.into()));
         if c.life {
             v.push(("lof", tokens::token(&tokens::LIFE_OF, c.life_of).into()));
@@ -348,7 +360,23 @@ pub(super) fn read_choices<'a>(
             "goodman, gerber, swt, morrow",
             d.mean_stress,
         )?,
+        rotating: pick("rot", take("rot"), &[(true, "on")], "on", d.rotating)?,
+        notch_q: pick(
+            "nq",
+            take("nq"),
+            &tokens::NOTCH_Q,
+            "typed, neuber",
+            d.notch_q,
+        )?,
+        static_kt: pick("skt", take("skt"), &[(false, "off")], "off", d.static_kt)?,
     };
+    if c.fatigue && c.cycle == Cycle::Loads && !c.section_with_loads() {
+        return Err(LinkError::BadChoice(
+            "cyc",
+            "loads".into(),
+            "ratio, min, alt (loads needs src=section with a loaded section)",
+        ));
+    }
     if c.ends == Ends::PlaneStrain && c.kind == crate::model::choices::SectionKind::ThinCylinder {
         return Err(LinkError::BadChoice(
             "ends",

@@ -162,12 +162,20 @@ fn arb_choices() -> impl Strategy<Value = Choices> {
             0usize..6,
             0usize..6,
             any::<bool>(),
-            0usize..3,
+            0usize..4,
             any::<bool>(),
             0usize..4,
             0usize..3,
         ),
-        (any::<bool>(), 0usize..2, 0usize..3, 0usize..4),
+        (
+            any::<bool>(),
+            0usize..2,
+            0usize..3,
+            0usize..4,
+            any::<bool>(),
+            0usize..2,
+            any::<bool>(),
+        ),
     )
         .prop_map(
             |(
@@ -175,7 +183,7 @@ fn arb_choices() -> impl Strategy<Value = Choices> {
                 (ends, face, surf, layout, ng),
                 (su, tsc, cond, eu, ec, fcrit),
                 (mat, msu, crit, fat, cyc, sem, fin, load),
-                (life, lof, sn, msc),
+                (life, lof, sn, msc, rot, nq, skt),
             )| {
                 Choices {
                     source: tokens::SOURCE[src].0,
@@ -223,12 +231,16 @@ fn arb_choices() -> impl Strategy<Value = Choices> {
                     life_of: tokens::LIFE_OF[lof].0,
                     sn: tokens::SN_FROM[sn].0,
                     mean_stress: tokens::MEAN_STRESS[msc].0,
+                    rotating: rot,
+                    notch_q: tokens::NOTCH_Q[nq].0,
+                    static_kt: skt,
                 }
             },
         )
         .prop_map(|mut c| {
             // Choices a path does not use are not kept in a link: normalise them away.
             let d = Choices::default();
+            c.keep_cycle_valid();
             let used: Vec<&str> = choice_pairs(&c).into_iter().map(|(k, _)| k).collect();
             if !used.contains(&"kind") {
                 c.kind = d.kind;
@@ -292,6 +304,15 @@ fn arb_choices() -> impl Strategy<Value = Choices> {
             }
             if !used.contains(&"life") {
                 c.life = d.life;
+            }
+            if !used.contains(&"rot") {
+                c.rotating = d.rotating;
+            }
+            if !used.contains(&"nq") {
+                c.notch_q = d.notch_q;
+            }
+            if !used.contains(&"skt") {
+                c.static_kt = d.static_kt;
             }
             if !used.contains(&"lof") {
                 c.life_of = d.life_of;

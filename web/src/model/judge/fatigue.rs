@@ -4,13 +4,14 @@
 //! `stresscase-core`.
 
 use super::strength::is_steel;
-use crate::model::choices::{Choices, Cycle, Endurance};
+use crate::model::choices::{Choices, Cycle, Endurance, NotchQ};
 use crate::model::inputs::Num;
-use crate::model::source::{problem, Numbers, SourceProblem};
-use stresscase_core::fatigue::{self, FatigueCriterion, FatigueError, Marin};
+use crate::model::source::{self, problem, Numbers, SourceProblem};
+use stresscase_core::fatigue::{self, FatigueCriterion, FatigueError, Loading, Marin};
 use stresscase_core::material::Strengths;
+use stresscase_core::notch;
 use stresscase_core::section::Rank;
-use stresscase_core::{StressTensor, StressUnit};
+use stresscase_core::{AngleUnit, StressTensor, StressUnit};
 
 /// The fatigue part of a judgement, stresses in the case's unit.
 #[derive(Debug, Clone, PartialEq)]
@@ -34,6 +35,80 @@ pub struct FatigueOutcome {
     pub ratio: Option<f64>,
     /// A caution about the estimate (set when the material is not a steel).
     pub caution: Option<&'static str>,
+    /// On a section with loads: the notch factors the fatigue states use.
+    pub notch: Option<NotchFactors>,
+}
+
+/// The fatigue factors of a section's notch: Kf = 1 + q·(Kt − 1), Kfs = 1 + qs·(Kts − 1).
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct NotchFactors {
+    /// Kt (normal).
+    pub kt: f64,
+    /// Kts (shear).
+    pub kts: f64,
+    /// q (normal).
+    pub q: f64,
+    /// qs (shear).
+    pub qs: f64,
+    /// Kf.
+    pub kf: f64,
+    /// Kfs.
+    pub kfs: f64,
+    /// Neuber's constants √a and √as (√mm) when q and qs come from Neuber's equation.
+    pub neuber: Option<(f64, f64)>,
+}
+
+/// The notch factors of the case's section (`sut` in `unit`).
+fn notch_factors(
+    c: &Choices,
+    n: &impl Numbers,
+    sut: f64,
+    unit: StressUnit,
+) -> Result<NotchFactors, SourceProblem> {
+    let (kt, kts) = (n.get(Num::Kt), n.get(Num::Kts));
+    let (q, qs, neuber) = match c.notch_q {
+        NotchQ::Typed => (n.get(Num::Q), n.get(Num::Qs), None),
+        NotchQ::Neuber => {
+            let sut_mpa = unit.convert(sut, StressUnit::MPa);
+            let r_mm = n.get(Num::NotchR) * c.length.metres() * 1000.0;
+            let constant = |l| {
+                notch::neuber_constant(sut_mpa, l).map_err(|e| problem(Num::NotchR, e.to_string()))
+            };
+            let (a, a_s) = (constant(Loading::Bending)?, constant(Loading::Torsion)?);
+            let q =
+                |a| notch::sensitivity(a, r_mm).map_err(|e| problem(Num::NotchR, e.to_string()));
+            (q(a)?, q(a_s)?, Some((a, a_s)))
+        }
+    };
+    let kf = notch::fatigue_factor(kt, q).map_err(|e| {
+        problem(
+            if (0.0..=1.0).contains(&q) {
+                Num::Kt
+            } else {
+                Num::Q
+            },
+            e.to_string(),
+        )
+    })?;
+    let kfs = notch::fatigue_factor(kts, qs).map_err(|e| {
+        problem(
+            if (0.0..=1.0).contains(&qs) {
+                Num::Kts
+            } else {
+                Num::Qs
+            },
+            e.to_string(),
+        )
+    })?;
+    Ok(NotchFactors {
+        kt,
+        kts,
+        q,
+        qs,
+        kf,
+        kfs,
+        neuber,
+    })
 }
 
 impl FatigueOutcome {
@@ -94,11 +169,22 @@ pub const NOT_A_STEEL: &str = "Se′ = 0.5·Sut is a correlation for steels. Alu
 pub fn evaluate(
     c: &Choices,
     n: &impl Numbers,
-    tensor: &StressTensor,
-    unit: StressUnit,
+    on_screen: &StressTensor,
+    (unit, angle): (StressUnit, AngleUnit),
     s: &Strengths,
 ) -> Result<FatigueOutcome, SourceProblem> {
     let overflow = |num| problem(num, "the cycle overflows; check the magnitudes");
+    // On a section with loads the fatigue states come from the loads through Kf and Kfs.
+    let notch = if c.notch_fatigue() {
+        Some(notch_factors(c, n, s.ultimate_tensile(), unit)?)
+    } else {
+        None
+    };
+    let (first, loads_cycle) = match &notch {
+        Some(f) => source::fatigue_states(c, n, unit, angle, f.kf, f.kfs)?,
+        None => (*on_screen, None),
+    };
+    let tensor = &first;
     let second = || {
         StressTensor::new(
             n.get(Num::second(0)),
@@ -129,6 +215,11 @@ pub fn evaluate(
             mean: *tensor,
             alternating: second()?,
         },
+        Cycle::Loads => {
+            let (mean, alternating) = loads_cycle
+                .ok_or_else(|| problem(Num::N, "alternating loads need loads on a section"))?;
+            fatigue::Cycle { mean, alternating }
+        }
     };
     let (sa, sm) = cycle.equivalents();
     let to_mpa = unit.convert(1.0, StressUnit::MPa);
@@ -193,5 +284,6 @@ pub fn evaluate(
         in_use: c.fatigue_criterion,
         ratio,
         caution,
+        notch,
     })
 }

@@ -45,6 +45,19 @@ pub fn evaluate(
     let s = section(c, n)?;
     let (loads, pressure, k) = section_loads(c, n, elastic(c, n)?.nu);
     let at = point(c, n, angle);
+    // The static state is the peak of a loads cycle; Kt and Kts raise it unless the user
+    // chose not to (common practice for a ductile material).
+    let loads = if c.loads_cycle() {
+        let (steady, alternating) = cycle_loads(c, n, &loads, at);
+        steady.plus(&alternating)
+    } else {
+        loads
+    };
+    let k = if c.static_kt {
+        k
+    } else {
+        Concentration::default()
+    };
     let tensor = s
         .stress_at(&loads, &pressure, k, at)
         .map_err(|e| section_problem(e, c))?
@@ -54,8 +67,14 @@ pub fn evaluate(
         .scan(&loads, &pressure, k, SCAN_SAMPLES)
         .map_err(|e| section_problem(e, c))?;
     let mut warnings = vec![SAINT_VENANT];
+    if c.rotating_shaft() {
+        warnings.push(ROTATING);
+    }
     if c.ends == Ends::PlaneStrain && (pressure.inner != 0.0 || pressure.outer != 0.0) {
         warnings.push(PLANE_STRAIN_ENDS);
+    }
+    if c.loads_cycle() {
+        warnings.push(LOADS_CYCLE);
     }
     Ok((
         tensor,
@@ -98,6 +117,75 @@ fn vessel_problem(e: VesselError) -> SourceProblem {
         other => other.to_string(),
     };
     problem(num, message)
+}
+
+/// Printed for a rotating shaft: how its cycle is formed.
+pub const ROTATING: &str = "Rotating shaft: the resultant bending moment √(My² + Mz²) is fully reversed at the point (its peak in tension shown on screen), while the axial force, torque and pressure stay steady; transverse shear is left out of the cycle, as it is zero at the fibre where bending peaks.";
+
+/// Printed with a loads cycle: what the state on screen is.
+pub const LOADS_CYCLE: &str = "Loads that cycle: the state on screen and the static check are the peak, steady plus alternating loads; the fatigue check takes the steady and the alternating states at the point.";
+
+/// The steady and alternating loads of a loads cycle, in SI: the typed loads and the typed
+/// alternating ones, or on a rotating shaft the axial force and torque steady and the
+/// resultant bending moment fully reversed, turned so that it peaks in tension at the point.
+fn cycle_loads(c: &Choices, n: &impl Numbers, typed: &Loads, at: Location) -> (Loads, Loads) {
+    if c.rotating_shaft() {
+        let phi = match at {
+            Location::Round { phi, .. } => phi,
+            Location::Rectangle { .. } => 0.0,
+        };
+        return typed.rotating_at(phi);
+    }
+    let f = c.force.newtons();
+    let mm = c.moment.newton_metres();
+    let alternating = Loads {
+        n: n.get(Num::Na) * f,
+        my: n.get(Num::Mya) * mm,
+        mz: n.get(Num::Mza) * mm,
+        t: n.get(Num::Ta) * mm,
+        vy: n.get(Num::Vya) * f,
+        vz: n.get(Num::Vza) * f,
+    };
+    (*typed, alternating)
+}
+
+/// The fatigue states at the chosen point (in `unit`), with the fatigue factors `kf` and
+/// `kfs` in place of Kt and Kts: the state of the typed loads (the peak of a loads cycle), and
+/// for a loads cycle its steady (mean) and alternating states. Pressure is steady.
+///
+/// # Errors
+/// A refused input, attached to its number.
+pub fn fatigue_states(
+    c: &Choices,
+    n: &impl Numbers,
+    unit: StressUnit,
+    angle: AngleUnit,
+    kf: f64,
+    kfs: f64,
+) -> Result<(StressTensor, Option<(StressTensor, StressTensor)>), SourceProblem> {
+    let s = section(c, n)?;
+    let (loads, pressure, _) = section_loads(c, n, elastic(c, n)?.nu);
+    let at = point(c, n, angle);
+    let k = Concentration {
+        normal: kf,
+        shear: kfs,
+    };
+    let state = |l: &Loads, p: &Pressure| {
+        s.stress_at(l, p, k, at)
+            .map_err(|e| section_problem(e, c))?
+            .scaled(1.0 / unit.pascals())
+            .map_err(|_| overflow(Num::N))
+    };
+    if !c.loads_cycle() {
+        return Ok((state(&loads, &pressure)?, None));
+    }
+    let (steady, alternating) = cycle_loads(c, n, &loads, at);
+    let mean = state(&steady, &pressure)?;
+    let amplitude = state(&alternating, &Pressure::NONE)?;
+    Ok((
+        state(&steady.plus(&alternating), &pressure)?,
+        Some((mean, amplitude)),
+    ))
 }
 
 /// Printed with plane-strain ends: the assumption and where its ν comes from.
