@@ -4,15 +4,21 @@
 //! the `rainflow` and `fatpack` packages), the history in the case link and back, a refused
 //! value marking the results stale, the fatigue check's own cycle on the estimated line, and a
 //! stepped shaft under rotating bending and steady torque (Kf and Kfs by Neuber's equation,
-//! both states, the fatigue factor and the life) against the beam and torsion formulas.
+//! both states, the fatigue factor and the life) against the beam and torsion formulas, and a
+//! rosette logger table's critical-plane damage and governing plane against core's rosette
+//! reduction, plane scan, rainflow count and Miner's sum.
 
+use std::fmt::Write as _;
+use stresscase_core::critical_plane;
 use stresscase_core::damage::{HistoryLife, Miner};
 use stresscase_core::fatigue::{
     factor, marin, unmodified_endurance_mpa, Cycle, FatigueCriterion, Loading, Surface,
 };
+use stresscase_core::hooke::Elastic;
 use stresscase_core::mean_stress::{MeanStress, Reversed};
 use stresscase_core::notch::{fatigue_factor, neuber_constant, sensitivity};
 use stresscase_core::rainflow::count;
+use stresscase_core::rosette::{reduce, Gauge, RECTANGULAR};
 use stresscase_core::sn_curve::{estimated_fraction, Life, SnLine};
 use stresscase_core::StressTensor;
 use stresscase_tests::page::Page;
@@ -216,4 +222,83 @@ fn a_stepped_shaft_under_rotating_bending_and_steady_torque() {
     );
     p.no_console_errors();
     p.shot("life-shaft");
+}
+
+#[test]
+#[ignore = "needs the built page: run `cargo xtask test`"]
+fn a_rosette_logger_tables_critical_plane_damage() {
+    let mut p = Page::open();
+    p.b.click("src-rosette").unwrap();
+    p.wait_for_id("in-ge1");
+    p.choose("material", "1045cd"); // E = 207 GPa, ν = 0.292 from the material
+                                    // time and three gauges of a rectangular rosette in µε (invented logger numbers): a
+                                    // cycling load whose principal direction swings, on a mean strain.
+    let mut text = String::from("time [s],SG1,SG2,SG3\n");
+    let mut rows = Vec::new();
+    for i in 0..400 {
+        let t = f64::from(i) * 0.01;
+        let a = 900.0 * (t * 7.0).sin() + 250.0 * (t * 23.0).sin();
+        let r = [a + 300.0, 0.6 * a + 120.0, -0.2 * a];
+        rows.push(r);
+        let _ = writeln!(text, "{t:.2},{:.3},{:.3},{:.3}", r[0], r[1], r[2]);
+    }
+    let path = stresscase_tests::check::target_dir().join("page-life/logger.csv");
+    std::fs::create_dir_all(path.parent().unwrap()).unwrap();
+    std::fs::write(&path, &text).unwrap();
+    p.b.choose_file("table-file", &path).unwrap();
+    p.b.wait_for(
+        "document.getElementById('table-status')?.dataset.done === 'true'",
+        std::time::Duration::from_secs(30),
+    )
+    .unwrap();
+    p.choose("table-history-from", "plane");
+    p.b.click("table-use-history").unwrap();
+    p.wait_for_id("sn-line");
+    // Core: the rows' plane states (as written to the file, 3 decimals), every plane 2°
+    // apart, the governing one, and its history counted and damaged on the estimated line.
+    let steel = Elastic::try_new(207e9, 0.292).unwrap();
+    let states: Vec<[f64; 3]> = text
+        .lines()
+        .skip(1)
+        .map(|l| {
+            let v: Vec<f64> = l.split(',').map(|x| x.parse().unwrap()).collect();
+            let g: Vec<Gauge> = (0..3)
+                .map(|k| Gauge {
+                    angle: RECTANGULAR[k],
+                    strain: v[k + 1] * 1e-6,
+                })
+                .collect();
+            let t = reduce(&g, None)
+                .unwrap()
+                .stress(&steel)
+                .unwrap()
+                .scaled(1e-6)
+                .unwrap();
+            let c = t.components();
+            [c[0], c[1], c[3]]
+        })
+        .collect();
+    let se = marin(Surface::Machined, SUT, 40.0, Loading::Bending, 20.0, 90.0)
+        .unwrap()
+        .product()
+        * unmodified_endurance_mpa(SUT);
+    let line = SnLine::through_strengths(estimated_fraction(SUT, se).unwrap(), SUT, se).unwrap();
+    let planes = critical_plane::scan(&states, 2.0, MeanStress::Goodman, &line, SUT).unwrap();
+    let g = critical_plane::governing(&planes).unwrap();
+    assert!(g.damage > 0.0, "pick strains that do damage");
+    p.wait_value("plane_theta", g.theta.to_degrees());
+    p.wait_value("hist_damage", g.damage);
+    p.wait_value("hist_points", 400.0);
+    // The time column gives the duration: 4 s for 400 rows 0.01 s apart.
+    if let HistoryLife::Repeats(r) = g.life {
+        p.wait_value("hist_hours", r * 4.0 / 3600.0);
+    }
+    // Not in the link: the link says lof=table and holds no values.
+    let link = p.text("location.hash");
+    assert!(
+        link.contains("lof=table") && !link.contains("hist="),
+        "{link}"
+    );
+    p.no_console_errors();
+    p.shot("life-table-plane");
 }

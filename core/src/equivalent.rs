@@ -21,6 +21,19 @@ use crate::tensor::StressTensor;
 #[cfg(feature = "serde")]
 use serde::{Deserialize, Serialize};
 
+/// von Mises signed by the principal stress of largest magnitude: +σvm when |σ1| ≥ |σ3| and
+/// σ1 ≥ 0, −σvm when the compressive σ3 is the larger in magnitude (a common practice for
+/// counting a history of multiaxial states as one signal; a tie counts as tension, the safe
+/// side).
+#[must_use]
+pub fn signed_von_mises(sigma1: f64, sigma3: f64, von_mises: f64) -> f64 {
+    if sigma3.abs() > sigma1.abs() && sigma3 < 0.0 {
+        -von_mises
+    } else {
+        von_mises
+    }
+}
+
 /// Below this fraction of ‖σ‖ the deviator counts as zero (see module docs).
 pub const DEVIATOR_FLOOR: f64 = 1e-12;
 

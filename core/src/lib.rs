@@ -22,6 +22,7 @@ extern crate alloc;
 extern crate std;
 
 pub mod criteria;
+pub mod critical_plane;
 pub mod damage;
 pub mod equivalent;
 pub mod error;

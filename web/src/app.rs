@@ -123,6 +123,10 @@ pub fn App() -> impl IntoView {
         );
     let stale = Memo::new(move |_| result.with(Result::is_err));
     provide_context::<SharedResult>(result);
+    // The table's load history, shared by the table view (which makes it) and the life panel.
+    provide_context(RwSignal::new(
+        None::<std::sync::Arc<crate::model::table::history::TableHistory>>,
+    ));
     // Phones get drawings made for their width; follow the window as it turns or resizes.
     let narrow = RwSignal::new(browser::is_narrow());
     provide_context(NarrowScreen(narrow));

@@ -357,8 +357,9 @@ fn ensure_python_module(module: &str) -> Result {
 /// The native benchmarks, then the built page's (built first; Chromium installed if missing):
 /// each prints its figures beside its named peer's from the same run.
 fn bench() -> Result {
-    ensure_python_module("numpy")?;
-    ensure_python_module("pandas")?;
+    for module in ["numpy", "pandas", "rainflow"] {
+        ensure_python_module(module)?;
+    }
     for bench in ["principal_speed", "table_speed", "rainflow_speed"] {
         run(
             &cargo(),
@@ -368,7 +369,7 @@ fn bench() -> Result {
     setup(true)?;
     build_page()?;
     let dist = root().join("dist").display().to_string();
-    for bench in ["page_table_speed", "page_keystroke"] {
+    for bench in ["page_table_speed", "page_keystroke", "page_life_speed"] {
         run_env(
             &cargo(),
             &["bench", "-p", "stresscase-tests", "--bench", bench],

@@ -168,6 +168,8 @@ pub enum LifeOf {
     Cycle,
     /// A pasted load history (stress values at the point), counted by rainflow.
     History,
+    /// A history from the table of many points (kept in the tab, not in the case link).
+    Table,
 }
 
 /// Where the S–N line comes from.
@@ -363,6 +365,12 @@ impl Choices {
         self.life_on() && (self.sn == SnFrom::Own || self.mean_stress == MeanStressPick::Morrow)
     }
 
+    /// Whether the life is of a history (typed or from the table), which may have a duration.
+    #[must_use]
+    pub fn any_history_on(&self) -> bool {
+        self.life_on() && matches!(self.life_of, LifeOf::History | LifeOf::Table)
+    }
+
     /// Whether the life is of a pasted history.
     #[must_use]
     pub fn history_on(&self) -> bool {
@@ -484,8 +492,11 @@ pub mod tokens {
     ];
 
     /// `lof`: what the life is of.
-    pub const LIFE_OF: [(LifeOf, &str); 2] =
-        [(LifeOf::Cycle, "cycle"), (LifeOf::History, "history")];
+    pub const LIFE_OF: [(LifeOf, &str); 3] = [
+        (LifeOf::Cycle, "cycle"),
+        (LifeOf::History, "history"),
+        (LifeOf::Table, "table"),
+    ];
     /// `sn`: the S–N line.
     pub const SN_FROM: [(SnFrom, &str); 3] = [
         (SnFrom::Estimate, "estimate"),
@@ -510,5 +521,40 @@ pub mod tokens {
     #[must_use]
     pub fn value<T: Copy>(table: &[(T, &'static str)], t: &str) -> Option<T> {
         table.iter().find(|(_, s)| *s == t).map(|(x, _)| *x)
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn every_life_and_cycle_choice_has_a_link_token() {
+        let has = |t: &str| !t.is_empty();
+        for v in [LifeOf::Cycle, LifeOf::History, LifeOf::Table] {
+            assert!(has(tokens::token(&tokens::LIFE_OF, v)), "{v:?}");
+        }
+        for v in [SnFrom::Estimate, SnFrom::Fraction, SnFrom::Own] {
+            assert!(has(tokens::token(&tokens::SN_FROM, v)), "{v:?}");
+        }
+        for v in [
+            MeanStressPick::Goodman,
+            MeanStressPick::Gerber,
+            MeanStressPick::SmithWatsonTopper,
+            MeanStressPick::Morrow,
+        ] {
+            assert!(has(tokens::token(&tokens::MEAN_STRESS, v)), "{v:?}");
+        }
+        for v in [
+            Cycle::Ratio,
+            Cycle::Minimum,
+            Cycle::Alternating,
+            Cycle::Loads,
+        ] {
+            assert!(has(tokens::token(&tokens::CYCLE, v)), "{v:?}");
+        }
+        for v in [NotchQ::Typed, NotchQ::Neuber] {
+            assert!(has(tokens::token(&tokens::NOTCH_Q, v)), "{v:?}");
+        }
     }
 }

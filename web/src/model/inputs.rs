@@ -429,7 +429,7 @@ inputs! {
         |c| c.life_on() && c.mean_stress == MeanStressPick::Morrow;
     /// How long the history lasts, hours (optional).
     HistHours: "hdur", "in-hdur", Fixed("duration of the history (empty: not known)"), Hours, "", optional, LifeHistory,
-        Choices::history_on;
+        Choices::any_history_on;
 }
 
 fn alternating_loads(c: &Choices) -> bool {

@@ -9,7 +9,10 @@ mod life;
 mod strength;
 
 pub use fatigue::{FatigueOutcome, NotchFactors, NOT_A_STEEL};
-pub use life::{CycleLife, HistoryOutcome, LifeOutcome, LifeResult, LineFrom};
+pub use life::{
+    history_outcome, plane_outcome, CycleLife, HistoryOutcome, LifeOutcome, LifeResult, LineFrom,
+    PlaneLife, PLANE_STEP_DEG,
+};
 
 use crate::model::choices::{Choices, Source};
 use crate::model::source::{self, Numbers, SourceProblem};

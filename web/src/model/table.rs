@@ -8,6 +8,7 @@
 //! A row whose numbers the path refuses (a rosette reduction that overflows, say) is refused
 //! with the reason; the whole table is refused when its columns do not make one kind of state.
 
+pub mod history;
 pub mod picture;
 
 use crate::model::case::Case;

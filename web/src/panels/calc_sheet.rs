@@ -168,6 +168,9 @@ fn life_verdict(l: &crate::model::judge::LifeOutcome) -> String {
             HistoryLife::Infinite => "infinite (no cycle does damage)".into(),
             HistoryLife::NotGiven => "not given (some cycle is outside the S–N line)".into(),
         },
+        LifeResult::Table(_) => {
+            "of the table's history, shown on the page (the table is not in this case)".into()
+        }
     }
 }
 

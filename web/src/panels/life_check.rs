@@ -2,17 +2,23 @@
 //! check's cycle or the damage of a typed load history (rainflow counting, Miner's rule), with
 //! the S–N diagram, the cycle matrix and the damage in each range bin.
 
+use crate::edge::browser;
 use crate::model::case::{CaseForm, Field};
 use crate::model::choices::tokens;
 use crate::model::evaluation::Evaluation;
 use crate::model::inputs::Place;
-use crate::model::judge::{HistoryOutcome, LifeOutcome, LifeResult, LineFrom};
+use crate::model::judge::{
+    history_outcome, plane_outcome, HistoryOutcome, LifeOutcome, LifeResult, LineFrom,
+    PLANE_STEP_DEG,
+};
 use crate::model::numfmt::{format_sig, RESULT_DIGITS};
+use crate::model::table::history::{HistoryValues, TableHistory};
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::export_buttons::ExportButtons;
 use crate::panels::number_field::SourceFields;
 use crate::panels::stale_notice::StaleBadge;
 use leptos::prelude::*;
+use std::sync::Arc;
 use stresscase_core::damage::HistoryLife;
 use stresscase_core::mean_stress::Reversed;
 use stresscase_core::rainflow::CycleMatrix;
@@ -22,6 +28,9 @@ use stresscase_core::StressUnit;
 mod pictures;
 
 use pictures::{bin_bars, matrix_cells, sn_picture, BINS};
+
+/// Shown when the life is of the table's history but none was chosen.
+const NO_TABLE_HISTORY: &str = "no table history yet: read a table under “Many points” and choose its history there (the table is not in the case link)";
 
 /// Words for a life in cycles.
 fn life_words(life: &Life) -> String {
@@ -204,11 +213,52 @@ pub fn LifeCheck(
     let fatigue_on = Memo::new(move |_| form.with(|f| f.choices.fatigue));
     let on = Memo::new(move |_| form.with(|f| f.choices.life_on()));
     let of_history = Memo::new(move |_| form.with(|f| f.choices.history_on()));
+    let of_table = Memo::new(move |_| {
+        form.with(|f| {
+            f.choices.life_on() && f.choices.life_of == crate::model::choices::LifeOf::Table
+        })
+    });
     let strengths = Memo::new(move |_| form.with(|f| f.choices.life_strengths()));
     let data = Memo::new(move |_| {
         shown.with(|e| {
             e.as_ref()
                 .and_then(|e| e.judgement.life.clone().map(|l| (l, e.unit)))
+        })
+    });
+    // A history from the table is worked out here: the case does not hold the table.
+    let table_history = use_context::<RwSignal<Option<Arc<TableHistory>>>>();
+    let table_life = Memo::new(move |_| {
+        data.with(|d| {
+            let (l, _) = d.as_ref()?;
+            let LifeResult::Table(hours) = l.result else {
+                return None;
+            };
+            let Some(th) = table_history.and_then(|t| t.get()) else {
+                return Some(Err(NO_TABLE_HISTORY.to_string()));
+            };
+            let hours = hours.or(th.seconds.map(|s| s / 3600.0));
+            let line = (&l.line, l.mean_stress, l.sut);
+            browser::mark("life:count");
+            let out = Some(match &th.values {
+                HistoryValues::Signal(v) => history_outcome(v, line, hours)
+                    .map(|h| Arc::new((th.about.clone(), h, None)))
+                    .map_err(|e| e.to_string()),
+                HistoryValues::Planes(p) => plane_outcome(p, l, hours).map(|p| {
+                    let plane = (p.theta, p.planes.len());
+                    Arc::new((th.about.clone(), p.on_plane, Some(plane)))
+                }),
+            });
+            browser::mark("life:counted");
+            out
+        })
+    });
+    // The history shown: the typed one, or the table's (with its source and, for the
+    // critical plane, the governing plane's angle and the planes counted).
+    let history = Memo::new(move |_| {
+        data.with(|d| match d.as_ref().map(|(l, _)| &l.result) {
+            Some(LifeResult::History(h)) => Some(Arc::new((String::new(), h.clone(), None))),
+            Some(LifeResult::Table(_)) => table_life.get().and_then(Result::ok),
+            _ => None,
         })
     });
     let rows = move || {
@@ -257,6 +307,18 @@ pub fn LifeCheck(
                         v.push(row("life_n", "life".into(), n, text));
                     }
                     LifeResult::History(h) => v.extend(history_rows(h)),
+                    LifeResult::Table(_) => match table_life.get() {
+                        Some(Ok(t)) => {
+                            let (about, h, plane) = &*t;
+                            v.push(row("hist_from", "history from the table (not in the case link)".into(), None, about.clone()));
+                            if let Some((theta, planes)) = plane {
+                                v.push(row("plane_theta", format!("governing plane: its normal from x towards y ({planes} planes, every {} °)", format_sig(PLANE_STEP_DEG, 2)), Some(theta.to_degrees()), format!("{} °", format_sig(theta.to_degrees(), 4))));
+                            }
+                            v.extend(history_rows(h));
+                        }
+                        Some(Err(e)) => v.push(row("hist_from", "history from the table".into(), None, e)),
+                        None => {}
+                    },
                 }
                 v.collect_view()
             })
@@ -265,7 +327,8 @@ pub fn LifeCheck(
     let sn = move || {
         data.with(|d| {
             d.as_ref().map(|(l, u)| {
-                let p = sn_picture(l);
+                let h = history.get();
+                let p = sn_picture(l, h.as_deref().map(|(_, h, _)| h));
                 let u = u.symbol();
                 let tx = p.ticks_n.iter().map(|(x, t)| view! { <g class="tick"><line x1=*x x2=*x y1=p.frame.3 y2=p.frame.3 + 4.0/><text x=*x y=p.frame.3 + 15.0 text-anchor="middle">{t.clone()}</text></g> }).collect_view();
                 let ty = p.ticks_s.iter().map(|(y, t)| view! { <g class="tick"><line x1=p.frame.0 - 4.0 x2=p.frame.0 y1=*y y2=*y/><text x=p.frame.0 - 6.0 y=y + 4.0 text-anchor="end">{t.clone()}</text></g> }).collect_view();
@@ -294,8 +357,9 @@ pub fn LifeCheck(
     };
     let matrix = move || {
         data.with(|d| {
-            let (l, u) = d.as_ref()?;
-            let LifeResult::History(h) = &l.result else { return None };
+            let (_, u) = d.as_ref()?;
+            let held = history.get()?;
+            let h = &held.1;
             let counts = CycleMatrix::of(&h.cycles, BINS, BINS, |i| h.cycles[i].count);
             let damage = CycleMatrix::of(&h.cycles, BINS, 1, |i| h.miner.per_cycle[i]);
             let u = u.symbol();
@@ -355,7 +419,7 @@ pub fn LifeCheck(
             <div class="verdict-grid" hidden=move || !on.get()>
                 <div class="verdict-inputs">
                     <ChoiceSelect form=form id="life-of" label="Life of"
-                        options=vec![("cycle", "the fatigue check's cycle, repeated"), ("history", "a load history typed or pasted below")]
+                        options=vec![("cycle", "the fatigue check's cycle, repeated"), ("history", "a load history typed or pasted below"), ("table", "the history chosen in the table of many points")]
                         get=|f| tokens::token(&tokens::LIFE_OF, f.choices.life_of)
                         set=|f, v| if let Some(x) = tokens::value(&tokens::LIFE_OF, v) { f.choices.life_of = x; }/>
                     <ChoiceSelect form=form id="sn-line" label="S–N line"
@@ -370,10 +434,11 @@ pub fn LifeCheck(
                     <SourceFields form=form place=Place::LifeLine/>
                     <div hidden=move || !of_history.get()>
                         <HistoryEntry form=form/>
-                        <SourceFields form=form place=Place::LifeHistory/>
                     </div>
+                    <p class="hint" hidden=move || !of_table.get()>"The history comes from the table under “Many points” (choose it there, after the rows are computed). The table stays in this browser tab: it is not in the case link or the calc sheet's QR code. The duration, when left empty, is the table's time column span."</p>
+                    <SourceFields form=form place=Place::LifeHistory/>
                     <table class="result-group life-results" id="life-table" class:stale=move || stale.get()><tbody>{rows}</tbody></table>
-                    <p class="hint">{move || life_notes(of_history.get())}</p>
+                    <p class="hint">{move || life_notes(of_history.get() || of_table.get(), of_table.get())}</p>
                 </div>
                 <figure class="fatigue-plot">{sn}<ExportButtons svg_id="sn-svg" name="sn-diagram"/></figure>
                 {matrix}
@@ -383,12 +448,17 @@ pub fn LifeCheck(
 }
 
 /// The method and its limits, as printed under the results.
-fn life_notes(history: bool) -> &'static str {
-    if history {
-        "Rainflow counting per ASTM E1049-85 (2017) §5.4.4, three-point method: the history is reduced to its peaks and valleys (first and last points kept), counting starts at the first point, a range containing the starting point counts as a half cycle, and ranges left at the end count as half cycles. Each cycle's amplitude and mean go through the correction to σar, the S–N line gives its life N, and Miner's rule sums n/N; it ignores the order of the cycles. A compressive mean is taken as not helping (σar = σa; common practice); Smith–Watson–Topper with σmax ≤ 0 does no damage. The history is in the case's stress unit and is kept in the case link. Lives are estimates with wide scatter: check them against test data for the part."
-    } else {
-        "The cycle is the fatigue check's (von Mises σa,eq and σm,eq, the mean signed by I1). A compressive mean is taken as not helping (σar = σa; common practice); Smith–Watson–Topper with σmax ≤ 0 does no damage. Below 10³ cycles a stress-life line does not apply (low-cycle fatigue): no life is given. Lives are estimates with wide scatter: check them against test data for the part."
+fn life_notes(history: bool, table: bool) -> String {
+    let common = "A compressive mean is taken as not helping (σar = σa; common practice); Smith–Watson–Topper with σmax ≤ 0 does no damage. Below 10³ cycles a stress-life line does not apply (low-cycle fatigue): no life is given. Lives are estimates with wide scatter: check them against test data for the part.";
+    if !history {
+        return format!("The cycle is the fatigue check's (von Mises σa,eq and σm,eq, the mean signed by I1). {common}");
     }
+    let kept = if table {
+        "A history from the table is in the case's stress unit and stays in this browser tab: it is not in the case link. The critical-plane count takes the normal stress on planes through the point whose normals lie in the x–y plane, every 2°, counts and damages each, and reports the plane with the most damage; it ignores the shear on each plane and the out-of-plane components, so it suits tensile (mode I) cracking at a free surface. Signed von Mises takes the sign of the principal stress of largest magnitude (common practice)."
+    } else {
+        "The typed history is in the case's stress unit and is kept in the case link."
+    };
+    format!("Rainflow counting per ASTM E1049-85 (2017) §5.4.4, three-point method: the history is reduced to its peaks and valleys (first and last points kept), counting starts at the first point, a range containing the starting point counts as a half cycle, and ranges left at the end count as half cycles. Each cycle's amplitude and mean go through the correction to σar, the S–N line gives its life N, and Miner's rule sums n/N; it ignores the order of the cycles. {kept} {common}")
 }
 
 /// The typed load history: a text area that validates as you type.
@@ -427,7 +497,7 @@ mod tests {
         };
         assert_eq!(h.points, 13);
         assert!(h.miner.total >= 0.0);
-        let p = sn_picture(&l);
+        let p = sn_picture(&l, Some(h));
         assert_eq!(p.points, h.cycles.len());
     }
 }

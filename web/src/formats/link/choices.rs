@@ -349,7 +349,7 @@ pub(super) fn read_choices<'a>(
             "lof",
             take("lof"),
             &tokens::LIFE_OF,
-            "cycle, history",
+            "cycle, history, table",
             d.life_of,
         )?,
         sn: pick("sn", take("sn"), &tokens::SN_FROM, "estimate, f, own", d.sn)?,

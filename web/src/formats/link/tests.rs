@@ -169,7 +169,7 @@ fn arb_choices() -> impl Strategy<Value = Choices> {
         ),
         (
             any::<bool>(),
-            0usize..2,
+            0usize..3,
             0usize..3,
             0usize..4,
             any::<bool>(),

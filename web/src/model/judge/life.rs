@@ -8,6 +8,7 @@ use crate::model::case::{Field, FieldProblem};
 use crate::model::choices::{Choices, LifeOf, MeanStressPick, SnFrom};
 use crate::model::inputs::Num;
 use crate::model::source::Numbers;
+use stresscase_core::critical_plane::{self, PlaneDamage};
 use stresscase_core::damage::{HistoryLife, Miner};
 use stresscase_core::mean_stress::{MeanStress, Reversed};
 use stresscase_core::rainflow::{self, RainflowCycle};
@@ -75,7 +76,71 @@ pub enum LifeResult {
     Cycle(CycleLife),
     /// A typed history.
     History(HistoryOutcome),
+    /// A history from the table (worked out beside the table, which the case does not hold);
+    /// the typed duration, hours, if any.
+    Table(Option<f64>),
 }
+
+/// The critical-plane count of a table's plane states.
+#[derive(Debug, Clone, PartialEq)]
+pub struct PlaneLife {
+    /// Every plane's damage.
+    pub planes: Vec<PlaneDamage>,
+    /// The governing plane's angle, radians.
+    pub theta: f64,
+    /// The governing plane's history, counted and damaged.
+    pub on_plane: HistoryOutcome,
+}
+
+/// Counts and damages a history `values` (case unit) on `line` with `mean_stress` (`sut` in
+/// the case unit); `hours` is how long one history lasts.
+///
+/// # Errors
+/// A value that does not count.
+pub fn history_outcome(
+    values: &[f64],
+    (line, mean_stress, sut): (&SnLine, MeanStress, f64),
+    hours: Option<f64>,
+) -> Result<HistoryOutcome, rainflow::HistoryError> {
+    let turning = rainflow::turning_points(values)?.len();
+    let cycles = rainflow::count(values)?;
+    let miner = Miner::sum(&cycles, mean_stress, line, sut);
+    let life = miner.life();
+    Ok(HistoryOutcome {
+        points: values.len(),
+        turning,
+        cycles,
+        miner,
+        life,
+        hours,
+    })
+}
+
+/// The critical-plane count of plane states (σx, σy, τxy) in the case unit: every plane every
+/// 2°, and the governing plane's history in full.
+///
+/// # Errors
+/// A value that does not count, in words.
+pub fn plane_outcome(
+    states: &[[f64; 3]],
+    l: &LifeOutcome,
+    hours: Option<f64>,
+) -> Result<PlaneLife, String> {
+    let planes = critical_plane::scan(states, PLANE_STEP_DEG, l.mean_stress, &l.line, l.sut)
+        .map_err(|e| e.to_string())?;
+    let theta = critical_plane::governing(&planes).map_or(0.0, |p| p.theta);
+    let mut history = Vec::new();
+    critical_plane::normal_history(states, theta, &mut history);
+    Ok(PlaneLife {
+        on_plane: history_outcome(&history, (&l.line, l.mean_stress, l.sut), hours)
+            .map_err(|e| e.to_string())?,
+        planes,
+        theta,
+    })
+}
+
+/// Degrees between the planes of the critical-plane count.
+pub const PLANE_STEP_DEG: f64 = 2.0;
 
 /// The life part of a judgement, stresses in the case unit.
 #[derive(Debug, Clone, PartialEq)]
@@ -194,17 +259,7 @@ pub fn evaluate(
                 life,
             })
         }
-        LifeOf::History => {
-            let history_problem = |e: rainflow::HistoryError| FieldProblem {
-                field: Field::History,
-                message: e.to_string(),
-            };
-            let turning = rainflow::turning_points(history)
-                .map_err(history_problem)?
-                .len();
-            let cycles = rainflow::count(history).map_err(history_problem)?;
-            let miner = Miner::sum(&cycles, mean_stress, &line, sut);
-            let life = miner.life();
+        LifeOf::History | LifeOf::Table => {
             let hours = (!n.absent(Num::HistHours)).then(|| n.get(Num::HistHours));
             if let Some(h) = hours {
                 if !(h.is_finite() && h > 0.0) {
@@ -214,14 +269,18 @@ pub fn evaluate(
                     ));
                 }
             }
-            LifeResult::History(HistoryOutcome {
-                points: history.len(),
-                turning,
-                cycles,
-                miner,
-                life,
-                hours,
-            })
+            if c.life_of == LifeOf::Table {
+                LifeResult::Table(hours)
+            } else {
+                LifeResult::History(
+                    history_outcome(history, (&line, mean_stress, sut), hours).map_err(|e| {
+                        FieldProblem {
+                            field: Field::History,
+                            message: e.to_string(),
+                        }
+                    })?,
+                )
+            }
         }
     };
     Ok(LifeOutcome {

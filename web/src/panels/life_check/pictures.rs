@@ -2,7 +2,7 @@
 //! endurance limit and the cycles, the cycle matrix and the damage in each range bin.
 //! Presentation only: every stress, life and damage comes from core through the outcome.
 
-use crate::model::judge::{LifeOutcome, LifeResult};
+use crate::model::judge::{HistoryOutcome, LifeOutcome, LifeResult};
 use crate::model::numfmt::{format_sig, superscript};
 use std::collections::BTreeSet;
 use stresscase_core::mean_stress::Reversed;
@@ -61,16 +61,18 @@ fn log_ticks(lo: f64, hi: f64) -> Vec<f64> {
     out
 }
 
-/// Builds the S–N diagram of a life outcome.
+/// Builds the S–N diagram of a life outcome, with the cycles of `history` when the life is of
+/// a history.
 #[must_use]
-pub fn sn_picture(l: &LifeOutcome) -> SnPicture {
+pub fn sn_picture(l: &LifeOutcome, history: Option<&HistoryOutcome>) -> SnPicture {
     // Each cycle as (σar, life); cycles without an amplitude are not drawn.
-    let cycles: Vec<(f64, Life)> = match &l.result {
-        LifeResult::Cycle(c) => match c.reversed {
+    let cycles: Vec<(f64, Life)> = match (&l.result, history) {
+        (LifeResult::Cycle(c), _) => match c.reversed {
             Reversed::Amplitude(a) => vec![(a, l.line.life(a))],
             _ => Vec::new(),
         },
-        LifeResult::History(h) => h
+        (_, None) => Vec::new(),
+        (_, Some(h)) => h
             .cycles
             .iter()
             .filter_map(

@@ -8,6 +8,7 @@
 //! chunks, and between them the browser paints the progress bar and takes input.
 
 mod column_kinds;
+mod history_pick;
 mod pictures;
 mod reading;
 mod worst_rows;
@@ -20,6 +21,7 @@ use crate::model::case::{Case, CaseForm, Mode};
 use crate::model::evaluation::Evaluation;
 use crate::model::table::{evaluate_rows, TableOutcome};
 use column_kinds::ColumnKinds;
+use history_pick::HistoryPick;
 use leptos::prelude::*;
 use leptos::task::spawn_local;
 use pictures::{MeasureHistogram, MeasureTrace};
@@ -382,6 +384,7 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
                 <MeasureTrace form=form shown=shown loaded=loaded outcome=outcome ranking=ranking/>
                 <MeasureHistogram form=form shown=shown outcome=outcome ranking=ranking/>
             </div>
+            <HistoryPick form=form loaded=loaded outcome=outcome unit=unit/>
             <div class="buttons export-row" hidden=move || ranking.get().is_none()>
                 <button type="button" id="table-export-all" on:click=move |_| export(false)>"Save all rows with their results as CSV"</button>
                 <button type="button" id="table-export-worst" on:click=move |_| export(true)>"Save the worst rows as CSV"</button>
