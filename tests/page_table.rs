@@ -10,12 +10,10 @@ use rand::{Rng, SeedableRng};
 use std::fmt::Write as _;
 use std::time::Duration;
 use stresscase_core::criteria::Criterion;
-use stresscase_core::hooke::Elastic;
 use stresscase_core::material::Strengths;
 use stresscase_core::points::{measure_all, worst_first, Measure};
-use stresscase_core::rosette::{reduce, Gauge, RECTANGULAR};
 use stresscase_core::{Principal, StressTensor};
-use stresscase_tests::check::target_dir;
+use stresscase_tests::check::{rectangular_rosette_mpa, target_dir};
 use stresscase_tests::page::Page;
 
 const WAIT: Duration = Duration::from_secs(60);
@@ -268,22 +266,10 @@ fn a_rosette_logger_file_goes_through_the_cases_rosette() {
     let (row, value) = first_listed(&mut p);
     // Core's rosette reduction with the page's elastic constants for the default material
     // (AISI 1020: E = 207 GPa, ν = 0.292, as the page shows them).
-    let steel = Elastic::try_new(207e9, 0.292).unwrap();
     let vms: Vec<f64> = rows
         .iter()
         .map(|r| {
-            let g: Vec<Gauge> = (0..3)
-                .map(|k| Gauge {
-                    angle: RECTANGULAR[k],
-                    strain: r[k] * 1e-6,
-                })
-                .collect();
-            let t = reduce(&g, None)
-                .unwrap()
-                .stress(&steel)
-                .unwrap()
-                .scaled(1e-6)
-                .unwrap();
+            let t = rectangular_rosette_mpa(*r, 207e9, 0.292);
             stresscase_core::equivalent::Equivalent::of(&t).von_mises
         })
         .collect();

@@ -8,14 +8,13 @@
 //! `cargo xtask bench` runs it after building the page; by hand:
 //! `cargo bench -p stresscase-tests --bench page_life_speed`.
 
-use rand::{Rng, SeedableRng};
 use std::fmt::Write as _;
 use std::time::{Duration, Instant};
 use stresscase_core::damage::Miner;
 use stresscase_core::mean_stress::MeanStress;
 use stresscase_core::rainflow::count;
 use stresscase_core::sn_curve::SnLine;
-use stresscase_tests::check::target_dir;
+use stresscase_tests::check::{random_walk, target_dir};
 use stresscase_tests::page::Page;
 
 fn main() {
@@ -23,14 +22,7 @@ fn main() {
         .ok()
         .and_then(|s| s.parse().ok())
         .unwrap_or(1_000_000);
-    let mut rng = rand_chacha::ChaCha8Rng::seed_from_u64(1049);
-    let mut level: f64 = 150.0;
-    let history: Vec<f64> = (0..n)
-        .map(|_| {
-            level = (level + rng.random_range(-20.0..20.0)).clamp(-100.0, 400.0);
-            level + rng.random_range(-60.0..60.0)
-        })
-        .collect();
+    let history = random_walk(n);
     let dir = target_dir().join("bench");
     std::fs::create_dir_all(&dir).expect("bench dir");
     let csv = dir.join(format!("history-{n}.csv"));

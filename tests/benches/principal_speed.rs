@@ -8,20 +8,9 @@
 
 use rand::{Rng, SeedableRng};
 use std::hint::black_box;
-use std::time::Instant;
 use stresscase_core::principal::{principal_values_into, Principal};
 use stresscase_core::StressTensor;
-use stresscase_tests::check::target_dir;
-
-fn best_of<F: FnMut()>(reps: usize, mut f: F) -> f64 {
-    (0..reps)
-        .map(|_| {
-            let t = Instant::now();
-            f();
-            t.elapsed().as_secs_f64()
-        })
-        .fold(f64::INFINITY, f64::min)
-}
+use stresscase_tests::check::{best_of, target_dir};
 
 fn main() {
     let n: usize = std::env::var("STRESSCASE_BENCH_N")

@@ -5,39 +5,19 @@
 //! Run: `cargo xtask bench` (or `cargo bench -p stresscase-tests --bench rainflow_speed`; needs
 //! python3 with numpy and rainflow). `STRESSCASE_BENCH_N` changes the length.
 
-use rand::{Rng, SeedableRng};
 use std::hint::black_box;
-use std::time::Instant;
 use stresscase_core::damage::Miner;
 use stresscase_core::mean_stress::MeanStress;
 use stresscase_core::rainflow::count;
 use stresscase_core::sn_curve::SnLine;
-use stresscase_tests::check::target_dir;
-
-fn best_of<F: FnMut()>(reps: usize, mut f: F) -> f64 {
-    (0..reps)
-        .map(|_| {
-            let t = Instant::now();
-            f();
-            t.elapsed().as_secs_f64()
-        })
-        .fold(f64::INFINITY, f64::min)
-}
+use stresscase_tests::check::{best_of, random_walk, target_dir};
 
 fn main() {
     let n: usize = std::env::var("STRESSCASE_BENCH_N")
         .ok()
         .and_then(|s| s.parse().ok())
         .unwrap_or(1_000_000);
-    // A random walk with noise: a logger's stress trace, in MPa.
-    let mut rng = rand_chacha::ChaCha8Rng::seed_from_u64(1049);
-    let mut level: f64 = 150.0;
-    let history: Vec<f64> = (0..n)
-        .map(|_| {
-            level = (level + rng.random_range(-20.0..20.0)).clamp(-100.0, 400.0);
-            level + rng.random_range(-60.0..60.0)
-        })
-        .collect();
+    let history = random_walk(n);
     let dir = target_dir().join("bench");
     std::fs::create_dir_all(&dir).expect("bench dir");
     let input = dir.join("history.f64");

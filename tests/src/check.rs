@@ -24,3 +24,56 @@ pub fn target_dir() -> std::path::PathBuf {
         .map(std::path::PathBuf::from)
         .unwrap_or_else(|| std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("../target"))
 }
+
+/// The least time of `reps` runs of `f`, seconds.
+pub fn best_of<F: FnMut()>(reps: usize, mut f: F) -> f64 {
+    (0..reps)
+        .map(|_| {
+            let t = std::time::Instant::now();
+            f();
+            t.elapsed().as_secs_f64()
+        })
+        .fold(f64::INFINITY, f64::min)
+}
+
+/// A logger's stress trace for the life benchmarks, MPa: a random walk between −100 and 400
+/// with noise of ±60, the same for the same `n` (seeded).
+#[must_use]
+pub fn random_walk(n: usize) -> Vec<f64> {
+    use rand::{Rng, SeedableRng};
+    let mut rng = rand_chacha::ChaCha8Rng::seed_from_u64(1049);
+    let mut level: f64 = 150.0;
+    (0..n)
+        .map(|_| {
+            level = (level + rng.random_range(-20.0..20.0)).clamp(-100.0, 400.0);
+            level + rng.random_range(-60.0..60.0)
+        })
+        .collect()
+}
+
+/// The plane stress, MPa, of a rectangular (0°, 45°, 90°) rosette's readings in µε, by core's
+/// rosette reduction with E (Pa) and ν.
+///
+/// # Panics
+/// For readings or constants core refuses.
+#[must_use]
+pub fn rectangular_rosette_mpa(
+    readings: [f64; 3],
+    e: f64,
+    nu: f64,
+) -> stresscase_core::StressTensor {
+    use stresscase_core::rosette::{reduce, Gauge, RECTANGULAR};
+    let g: Vec<Gauge> = (0..3)
+        .map(|k| Gauge {
+            angle: RECTANGULAR[k],
+            strain: readings[k] * 1e-6,
+        })
+        .collect();
+    let elastic = stresscase_core::hooke::Elastic::try_new(e, nu).expect("elastic constants");
+    reduce(&g, None)
+        .expect("a rosette reduction")
+        .stress(&elastic)
+        .expect("a stress")
+        .scaled(1e-6)
+        .expect("in MPa")
+}

@@ -307,6 +307,28 @@ impl Choices {
         }
     }
 
+    /// The same choices with the fatigue check and the life at their defaults (off): what a
+    /// single state's stress and static verdict depend on.
+    #[must_use]
+    pub fn without_fatigue(&self) -> Choices {
+        let d = Choices::default();
+        Choices {
+            fatigue: d.fatigue,
+            cycle: d.cycle,
+            endurance: d.endurance,
+            finish: d.finish,
+            loading: d.loading,
+            fatigue_criterion: d.fatigue_criterion,
+            life: d.life,
+            life_of: d.life_of,
+            sn: d.sn,
+            mean_stress: d.mean_stress,
+            rotating: d.rotating,
+            notch_q: d.notch_q,
+            ..*self
+        }
+    }
+
     /// Whether the path is a section that takes loads (so its loads may cycle).
     #[must_use]
     pub fn section_with_loads(&self) -> bool {

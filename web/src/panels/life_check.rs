@@ -15,6 +15,7 @@ use crate::model::numfmt::{format_sig, RESULT_DIGITS};
 use crate::model::table::history::{HistoryValues, TableHistory};
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::export_buttons::ExportButtons;
+use crate::panels::mohr_diagram::NarrowScreen;
 use crate::panels::number_field::SourceFields;
 use crate::panels::stale_notice::StaleBadge;
 use leptos::prelude::*;
@@ -211,6 +212,14 @@ pub fn LifeCheck(
     stale: Memo<bool>,
 ) -> impl IntoView {
     let fatigue_on = Memo::new(move |_| form.with(|f| f.choices.fatigue));
+    let narrow = use_context::<NarrowScreen>().map(|n| n.0);
+    let width = move || {
+        if narrow.is_some_and(|n| n.get()) {
+            pictures::W_NARROW
+        } else {
+            pictures::W_WIDE
+        }
+    };
     let on = Memo::new(move |_| form.with(|f| f.choices.life_on()));
     let of_history = Memo::new(move |_| form.with(|f| f.choices.history_on()));
     let of_table = Memo::new(move |_| {
@@ -328,12 +337,13 @@ pub fn LifeCheck(
         data.with(|d| {
             d.as_ref().map(|(l, u)| {
                 let h = history.get();
-                let p = sn_picture(l, h.as_deref().map(|(_, h, _)| h));
+                let w = width();
+                let p = sn_picture(l, h.as_deref().map(|(_, h, _)| h), w);
                 let u = u.symbol();
                 let tx = p.ticks_n.iter().map(|(x, t)| view! { <g class="tick"><line x1=*x x2=*x y1=p.frame.3 y2=p.frame.3 + 4.0/><text x=*x y=p.frame.3 + 15.0 text-anchor="middle">{t.clone()}</text></g> }).collect_view();
                 let ty = p.ticks_s.iter().map(|(y, t)| view! { <g class="tick"><line x1=p.frame.0 - 4.0 x2=p.frame.0 y1=*y y2=*y/><text x=p.frame.0 - 6.0 y=y + 4.0 text-anchor="end">{t.clone()}</text></g> }).collect_view();
                 view! {
-                    <svg id="sn-svg" viewBox=format!("0 0 {} {}", pictures::W, pictures::H) role="img"
+                    <svg id="sn-svg" viewBox=format!("0 0 {w} {}", pictures::H) role="img"
                         aria-label="S–N diagram: fully reversed amplitude against cycles to failure, log-log"
                         data-points=p.points.to_string()>
                         <rect class="plot-bg" x=p.frame.0 y=p.frame.1 width=p.frame.2 - p.frame.0 height=p.frame.3 - p.frame.1/>
@@ -359,38 +369,39 @@ pub fn LifeCheck(
         data.with(|d| {
             let (_, u) = d.as_ref()?;
             let held = history.get()?;
+            let w = width();
             let h = &held.1;
             let counts = CycleMatrix::of(&h.cycles, BINS, BINS, |i| h.cycles[i].count);
             let damage = CycleMatrix::of(&h.cycles, BINS, 1, |i| h.miner.per_cycle[i]);
             let u = u.symbol();
             let total: f64 = counts.cells.iter().sum();
-            let cells = matrix_cells(&counts).into_iter().map(|c| view! {
+            let cells = matrix_cells(&counts, w).into_iter().map(|c| view! {
                 <rect class="matrix-cell" x=c.x y=c.y width=c.w height=c.h fill-opacity=format!("{:.3}", c.shade)><title>{c.title}</title></rect>
             }).collect_view();
-            let bars = bin_bars(&damage).into_iter().map(|b| view! {
+            let bars = bin_bars(&damage, w).into_iter().map(|b| view! {
                 <rect class="damage-bar" x=b.x y=b.y width=b.w height=b.h><title>{b.title}</title></rect>
             }).collect_view();
             Some(view! {
                 <figure class="life-plot">
-                    <svg id="cycle-matrix-svg" viewBox=format!("0 0 {} {}", pictures::W, pictures::H) role="img"
+                    <svg id="cycle-matrix-svg" viewBox=format!("0 0 {w} {}", pictures::H) role="img"
                         aria-label="cycle matrix: counted cycles by range and mean" data-total=format!("{total:e}")>
-                        <rect class="plot-bg" x=pictures::LEFT y=pictures::TOP width=pictures::W - pictures::LEFT - pictures::RIGHT height=pictures::H - pictures::TOP - pictures::BOTTOM/>
+                        <rect class="plot-bg" x=pictures::LEFT y=pictures::TOP width=w - pictures::LEFT - pictures::RIGHT height=pictures::H - pictures::TOP - pictures::BOTTOM/>
                         {cells}
-                        <text class="axis-label" x=pictures::W - pictures::RIGHT y=pictures::H - 6.0 text-anchor="end">{format!("mean → {} to {} {u}", format_sig(counts.mean_span.0, 4), format_sig(counts.mean_span.1, 4))}</text>
+                        <text class="axis-label" x=w - pictures::RIGHT y=pictures::H - 6.0 text-anchor="end">{format!("mean → {} to {} {u}", format_sig(counts.mean_span.0, 4), format_sig(counts.mean_span.1, 4))}</text>
                         <text class="axis-label" x=pictures::LEFT y=pictures::H - 22.0>{format!("range ↑ 0 to {} {u}", format_sig(counts.range_max, 4))}</text>
                     </svg>
                     <figcaption>"Cycles counted in each range × mean bin (darker: more; hover for the count)."</figcaption>
                     <ExportButtons svg_id="cycle-matrix-svg" name="cycle-matrix"/>
                 </figure>
                 <figure class="life-plot">
-                    <svg id="damage-bins-svg" viewBox=format!("0 0 {} {}", pictures::W, pictures::H) role="img"
+                    <svg id="damage-bins-svg" viewBox=format!("0 0 {w} {}", pictures::H) role="img"
                         aria-label="damage in each range bin" data-total=format!("{:e}", h.miner.total)>
-                        <rect class="plot-bg" x=pictures::LEFT y=pictures::TOP width=pictures::W - pictures::LEFT - pictures::RIGHT height=pictures::H - pictures::TOP - pictures::BOTTOM/>
+                        <rect class="plot-bg" x=pictures::LEFT y=pictures::TOP width=w - pictures::LEFT - pictures::RIGHT height=pictures::H - pictures::TOP - pictures::BOTTOM/>
                         {bars}
                         {(h.miner.total <= 0.0).then(|| view! {
-                            <text class="zone-label" x=pictures::W / 2.0 y=pictures::H / 2.0 text-anchor="middle">"No cycle does damage: every one is at or below the endurance limit."</text>
+                            <text class="zone-label" x=w / 2.0 y=pictures::H / 2.0 text-anchor="middle">"No cycle does damage: every one is at or below the endurance limit."</text>
                         })}
-                        <text class="axis-label" x=pictures::W - pictures::RIGHT y=pictures::H - 6.0 text-anchor="end">{format!("range → 0 to {} {u}", format_sig(damage.range_max, 4))}</text>
+                        <text class="axis-label" x=w - pictures::RIGHT y=pictures::H - 6.0 text-anchor="end">{format!("range → 0 to {} {u}", format_sig(damage.range_max, 4))}</text>
                         <text class="axis-label" x=pictures::LEFT y=pictures::H - 22.0>"share of the damage D ↑"</text>
                     </svg>
                     <figcaption>"Share of the history's damage done by the cycles in each range bin (hover for the damage)."</figcaption>
@@ -497,7 +508,7 @@ mod tests {
         };
         assert_eq!(h.points, 13);
         assert!(h.miner.total >= 0.0);
-        let p = sn_picture(&l, Some(h));
+        let p = sn_picture(&l, Some(h), pictures::W_WIDE);
         assert_eq!(p.points, h.cycles.len());
     }
 }

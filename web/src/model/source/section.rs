@@ -136,17 +136,27 @@ fn cycle_loads(c: &Choices, n: &impl Numbers, typed: &Loads, at: Location) -> (L
         };
         return typed.rotating_at(phi);
     }
+    let alternating = loads_in_si(
+        c,
+        n,
+        [Num::Na, Num::Mya, Num::Mza, Num::Ta, Num::Vya, Num::Vza],
+    );
+    (*typed, alternating)
+}
+
+/// The loads typed in `nums` (N, My, Mz, T, Vy, Vz) converted to SI.
+fn loads_in_si(c: &Choices, n: &impl Numbers, nums: [Num; 6]) -> Loads {
     let f = c.force.newtons();
     let mm = c.moment.newton_metres();
-    let alternating = Loads {
-        n: n.get(Num::Na) * f,
-        my: n.get(Num::Mya) * mm,
-        mz: n.get(Num::Mza) * mm,
-        t: n.get(Num::Ta) * mm,
-        vy: n.get(Num::Vya) * f,
-        vz: n.get(Num::Vza) * f,
-    };
-    (*typed, alternating)
+    let [nn, my, mz, t, vy, vz] = nums.map(|k| n.get(k));
+    Loads {
+        n: nn * f,
+        my: my * mm,
+        mz: mz * mm,
+        t: t * mm,
+        vy: vy * f,
+        vz: vz * f,
+    }
 }
 
 /// The fatigue states at the chosen point (in `unit`), with the fatigue factors `kf` and
@@ -268,17 +278,8 @@ pub fn section(c: &Choices, n: &impl Numbers) -> Result<Section, SourceProblem> 
 
 /// Loads, pressure and factors in SI.
 fn section_loads(c: &Choices, n: &impl Numbers, nu: f64) -> (Loads, Pressure, Concentration) {
-    let f = c.force.newtons();
-    let mm = c.moment.newton_metres();
     let p = c.pressure.pascals();
-    let loads = Loads {
-        n: n.get(Num::N) * f,
-        my: n.get(Num::My) * mm,
-        mz: n.get(Num::Mz) * mm,
-        t: n.get(Num::T) * mm,
-        vy: n.get(Num::Vy) * f,
-        vz: n.get(Num::Vz) * f,
-    };
+    let loads = loads_in_si(c, n, [Num::N, Num::My, Num::Mz, Num::T, Num::Vy, Num::Vz]);
     let pressure = match c.kind {
         SectionKind::SolidRound => Pressure {
             inner: 0.0,

@@ -9,8 +9,11 @@ use stresscase_core::mean_stress::Reversed;
 use stresscase_core::rainflow::CycleMatrix;
 use stresscase_core::sn_curve::{Life, LOW_CYCLE_END};
 
-/// Drawing width and height (SVG units).
-pub const W: f64 = 460.0;
+/// Drawing width on a wide screen and on a phone (SVG units, drawn at about 1 unit per pixel so
+/// the text stays readable), and the height.
+pub const W_WIDE: f64 = 460.0;
+/// On a phone.
+pub const W_NARROW: f64 = 340.0;
 /// Height.
 pub const H: f64 = 300.0;
 /// Margins.
@@ -64,7 +67,7 @@ fn log_ticks(lo: f64, hi: f64) -> Vec<f64> {
 /// Builds the S–N diagram of a life outcome, with the cycles of `history` when the life is of
 /// a history.
 #[must_use]
-pub fn sn_picture(l: &LifeOutcome, history: Option<&HistoryOutcome>) -> SnPicture {
+pub fn sn_picture(l: &LifeOutcome, history: Option<&HistoryOutcome>, w: f64) -> SnPicture {
     // Each cycle as (σar, life); cycles without an amplitude are not drawn.
     let cycles: Vec<(f64, Life)> = match (&l.result, history) {
         (LifeResult::Cycle(c), _) => match c.reversed {
@@ -99,7 +102,7 @@ pub fn sn_picture(l: &LifeOutcome, history: Option<&HistoryOutcome>) -> SnPictur
     let s_min = cycles.iter().map(|c| c.0).fold(knee_s, f64::min) / 1.3;
     let s_max = cycles.iter().map(|c| c.0).fold(top, f64::max) * 1.3;
     let (s_lo, s_hi) = (s_min.log10(), s_max.log10());
-    let frame = (LEFT, TOP, W - RIGHT, H - BOTTOM);
+    let frame = (LEFT, TOP, w - RIGHT, H - BOTTOM);
     let x = |n: f64| frame.0 + (frame.2 - frame.0) * (n.log10() - n_lo) / (n_hi - n_lo);
     let y = |s: f64| frame.3 - (frame.3 - frame.1) * (s.log10() - s_lo) / (s_hi - s_lo);
     let knee_n = match l.line.endurance {
@@ -184,10 +187,10 @@ fn bin_span(lo: f64, hi: f64, n: usize, i: usize) -> (f64, f64) {
 
 /// The non-empty cells of a count matrix: range up, mean across.
 #[must_use]
-pub fn matrix_cells(m: &CycleMatrix) -> Vec<Cell> {
+pub fn matrix_cells(m: &CycleMatrix, w: f64) -> Vec<Cell> {
     let most = m.cells.iter().copied().fold(0.0, f64::max);
     let (pw, ph) = (
-        (W - LEFT - RIGHT) / m.means as f64,
+        (w - LEFT - RIGHT) / m.means as f64,
         (H - TOP - BOTTOM) / m.ranges as f64,
     );
     let mut out = Vec::new();
@@ -221,12 +224,12 @@ pub fn matrix_cells(m: &CycleMatrix) -> Vec<Cell> {
 
 /// One bar per range bin of a damage matrix (one mean bin), as its share of the total.
 #[must_use]
-pub fn bin_bars(m: &CycleMatrix) -> Vec<Cell> {
+pub fn bin_bars(m: &CycleMatrix, w: f64) -> Vec<Cell> {
     let total: f64 = m.cells.iter().sum();
     if total <= 0.0 {
         return Vec::new();
     }
-    let pw = (W - LEFT - RIGHT) / m.ranges as f64;
+    let pw = (w - LEFT - RIGHT) / m.ranges as f64;
     let ph = H - TOP - BOTTOM;
     (0..m.ranges)
         .filter(|&r| m.cells[r * m.means..(r + 1) * m.means].iter().sum::<f64>() > 0.0)

@@ -51,13 +51,24 @@ pub fn HistoryPick(
     let shared = use_context::<RwSignal<Option<Arc<TableHistory>>>>();
     let pick = RwSignal::new("svm".to_string());
     let status = RwSignal::new(String::new());
-    // A new table (or none) ends the history taken from the last one.
+    // The history holds the rows as they were computed: when they are computed again (a new
+    // table, its kinds or unit, or the case's path or material changed) it is dropped, never
+    // left standing for rows that no longer exist.
+    let generation = StoredValue::new(0u64);
+    let taken_at = StoredValue::new(None::<u64>);
     Effect::new(move |_| {
-        loaded.track();
-        if let Some(s) = shared {
-            s.set(None);
+        outcome.track();
+        generation.update_value(|g| *g += 1);
+        if taken_at
+            .get_value()
+            .is_some_and(|t| t != generation.get_value())
+        {
+            taken_at.set_value(None);
+            if let Some(s) = shared {
+                s.set(None);
+            }
+            status.set("The rows were computed again: take the history again.".into());
         }
-        status.set(String::new());
     });
     let options = move || {
         let mut v: Vec<(String, String)> = vec![
@@ -122,6 +133,7 @@ pub fn HistoryPick(
                     h.len()
                 ));
                 shared.set(Some(Arc::new(h)));
+                taken_at.set_value(Some(generation.get_value()));
                 form.update(|f| {
                     f.choices.fatigue = true;
                     f.choices.life = true;

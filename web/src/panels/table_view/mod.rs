@@ -105,8 +105,15 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
     // What of the case the rows depend on: its choices, numbers and units — not the typed
     // components, the turn, the probe's normal, the title or the note, so typing those does not
     // recompute every row.
+    // Nor the fatigue check and the life, which the rows' measures do not use (taking a
+    // history from the rows turns them on).
     let case_key = Memo::new(move |_| {
-        form.with(|f| Case::from_form(f).ok()).map(|mut c| {
+        form.with(|f| {
+            let mut f = f.clone();
+            f.choices = f.choices.without_fatigue();
+            Case::from_form(&f).ok()
+        })
+        .map(|mut c| {
             c.title.clear();
             c.note.clear();
             c.stress = [0.0; 6];
