@@ -1,6 +1,8 @@
 //! "Life in cycles": the S–N line and a mean-stress correction, and the life of the fatigue
-//! check's cycle or the damage of a typed load history (rainflow counting, Miner's rule), with
-//! the S–N diagram, the cycle matrix and the damage in each range bin.
+//! check's cycle or the damage of a load history — typed, or taken from the table of many
+//! points, whose count (and critical-plane scan) is worked out here because the case does not
+//! hold the table — by rainflow counting and Miner's rule, with the S–N diagram, the cycle
+//! matrix and the damage in each range bin.
 
 use crate::edge::browser;
 use crate::model::case::{CaseForm, Field};

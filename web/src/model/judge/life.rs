@@ -1,7 +1,9 @@
 //! The life in cycles: the S–N line (through f·Sut at 10³ cycles and Se at 10⁶, or the user's
 //! own Basquin curve), a mean-stress correction to a fully reversed amplitude, and either the
-//! life of the fatigue check's cycle or the damage and life of a typed load history (rainflow
-//! counting and Miner's rule). No formula here: every number comes from `stresscase-core`.
+//! life of the fatigue check's cycle or the damage and life of a load history (rainflow
+//! counting and Miner's rule): a typed one here, a table's through [`history_outcome`] and
+//! [`plane_outcome`], which the panel calls with the same line. No formula here: every number
+//! comes from `stresscase-core`.
 
 use super::FatigueOutcome;
 use crate::model::case::{Field, FieldProblem};
