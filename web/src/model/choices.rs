@@ -336,10 +336,14 @@ impl Choices {
     }
 
     /// Whether the fatigue check takes its states from the section's loads through Kf and
-    /// Kfs (fatigue on, a section with loads).
+    /// Kfs: fatigue on, a section with loads, and a cycle of those loads (a ratio R of them, or
+    /// steady and alternating loads). A typed minimum or amplitude is the user's own state, so
+    /// it pairs with the state on screen as shown.
     #[must_use]
     pub fn notch_fatigue(&self) -> bool {
-        self.fatigue && self.section_with_loads()
+        self.fatigue
+            && self.section_with_loads()
+            && matches!(self.cycle, Cycle::Ratio | Cycle::Loads)
     }
 
     /// Whether the cycle is of the section's steady and alternating loads.

@@ -137,8 +137,13 @@ impl Case {
             &self.history,
         )
         .map_err(|p| vec![p])?;
-        let governing = crate::model::judge::governing(&self.choices, self, self.unit, &judgement)
-            .map_err(from_source)?;
+        let governing = crate::model::judge::governing(
+            &self.choices,
+            self,
+            (self.unit, self.angle_unit),
+            &judgement,
+        )
+        .map_err(from_source)?;
         let theta = self.angle_unit.to_radians(angle);
         let probe = PlaneTraction::on(&tensor, Vector3::new(n[0], n[1], n[2]))
             .map_err(|e| fail(Field::Nx, e))?;

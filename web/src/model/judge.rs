@@ -118,7 +118,7 @@ impl Judgement {
 pub fn governing(
     c: &Choices,
     n: &impl Numbers,
-    unit: StressUnit,
+    units: (StressUnit, AngleUnit),
     j: &Judgement,
 ) -> Result<Option<Governing>, SourceProblem> {
     if c.source != Source::Section || !c.has_loads() {
@@ -131,13 +131,13 @@ pub fn governing(
         (g, n)
     };
     let static_point = if j.in_use_verdict().is_some() {
-        source::governing(c, n, unit, &|t| j.static_rank(t))?.map(factor)
+        source::governing(c, n, units, None, &|t| j.static_rank(t))?.map(factor)
     } else {
         None
     };
     let (fatigue_point, fatigue_note) = match &j.fatigue {
         Some(f) if f.ratio.is_some() => (
-            source::governing(c, n, unit, &|t| {
+            source::governing(c, n, units, f.notch.map(|k| (k.kf, k.kfs)), &|t| {
                 j.fatigue_rank(t).unwrap_or(Rank {
                     severity: f64::NAN,
                     tie: 0.0,
@@ -323,7 +323,9 @@ mod tests {
             .unwrap()
             .unwrap();
         let j = judge(&c, &n, &t, (StressUnit::MPa, AngleUnit::Degree)).unwrap();
-        let g = governing(&c, &n, StressUnit::MPa, &j).unwrap().unwrap();
+        let g = governing(&c, &n, (StressUnit::MPa, AngleUnit::Degree), &j)
+            .unwrap()
+            .unwrap();
         let tensile = |crit: &Critical| {
             let stresscase_core::section::Location::Round { phi, .. } = crit.at else {
                 panic!()
@@ -426,5 +428,45 @@ mod tests {
         assert!((f.cycle.mean.components()[0] - 1.8 * s(200.0)).abs() < 1e-9 * s(200.0));
         assert!((f.cycle.alternating.components()[0] - 1.8 * s(150.0)).abs() < 1e-9 * s(150.0));
         assert!((on_screen.components()[0] - s(350.0)).abs() < 1e-9 * s(350.0));
+    }
+
+    #[test]
+    fn the_governing_points_rank_the_states_they_decide() {
+        use crate::model::choices::{Cycle, NotchQ};
+        // Kt not applied statically, Kf = 1 + 0.5·(2 − 1) = 1.5 in fatigue: the governing
+        // search must give the factors the page shows for the point it finds.
+        let c = Choices {
+            source: Source::Section,
+            material: MaterialPick::Table(4),
+            fatigue: true,
+            cycle: Cycle::Ratio,
+            notch_q: NotchQ::Typed,
+            static_kt: false,
+            ..Choices::default()
+        };
+        let loads = [
+            (Num::N, 0.0),
+            (Num::Mz, 1000.0),
+            (Num::T, 0.0),
+            (Num::Vy, 0.0),
+            (Num::Phi, 180.0),
+            (Num::Ratio, 0.0),
+            (Num::Kt, 2.0),
+            (Num::Q, 0.5),
+        ];
+        let mut n = demo(&c);
+        for (k, v) in loads {
+            n.0.insert(k, v);
+        }
+        let (j, _) = shaft(c, &loads);
+        let g = governing(&c, &n, (StressUnit::MPa, AngleUnit::Degree), &j)
+            .unwrap()
+            .unwrap();
+        let (_, ns) = g.static_point.unwrap();
+        let (_, nf) = g.fatigue_point.unwrap();
+        let on_screen = j.in_use_verdict().unwrap().factor.unwrap();
+        let fatigue = j.fatigue.as_ref().unwrap().factor_in_use().unwrap();
+        assert!((ns.unwrap() - on_screen).abs() < 1e-6 * on_screen, "{ns:?} vs {on_screen}");
+        assert!((nf.unwrap() - fatigue).abs() < 1e-6 * fatigue, "{nf:?} vs {fatigue}");
     }
 }

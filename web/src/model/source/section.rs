@@ -45,19 +45,7 @@ pub fn evaluate(
     let s = section(c, n)?;
     let (loads, pressure, k) = section_loads(c, n, elastic(c, n)?.nu);
     let at = point(c, n, angle);
-    // The static state is the peak of a loads cycle; Kt and Kts raise it unless the user
-    // chose not to (common practice for a ductile material).
-    let loads = if c.loads_cycle() {
-        let (steady, alternating) = cycle_loads(c, n, &loads, at);
-        steady.plus(&alternating)
-    } else {
-        loads
-    };
-    let k = if c.static_kt {
-        k
-    } else {
-        Concentration::default()
-    };
+    let (loads, k) = static_loads(c, n, loads, k, at);
     let tensor = s
         .stress_at(&loads, &pressure, k, at)
         .map_err(|e| section_problem(e, c))?
@@ -124,6 +112,29 @@ pub const ROTATING: &str = "Rotating shaft: the resultant bending moment âˆš(MyÂ
 
 /// Printed with a loads cycle: what the state on screen is.
 pub const LOADS_CYCLE: &str = "Loads that cycle: the state on screen and the static check are the peak, steady plus alternating loads; the fatigue check takes the steady and the alternating states at the point.";
+
+/// The loads and factors of the state on screen: the peak of a loads cycle; Kt and Kts raise
+/// it unless the user chose not to (common practice for a ductile material).
+fn static_loads(
+    c: &Choices,
+    n: &impl Numbers,
+    typed: Loads,
+    k: Concentration,
+    at: Location,
+) -> (Loads, Concentration) {
+    let loads = if c.loads_cycle() {
+        let (steady, alternating) = cycle_loads(c, n, &typed, at);
+        steady.plus(&alternating)
+    } else {
+        typed
+    };
+    let k = if c.static_kt {
+        k
+    } else {
+        Concentration::default()
+    };
+    (loads, k)
+}
 
 /// The steady and alternating loads of a loads cycle, in SI: the typed loads and the typed
 /// alternating ones, or on a rotating shaft the axial force and torque steady and the
@@ -330,14 +341,27 @@ fn point(c: &Choices, n: &impl Numbers, angle: AngleUnit) -> Location {
 pub fn governing(
     c: &Choices,
     n: &impl Numbers,
-    unit: StressUnit,
+    (unit, angle): (StressUnit, AngleUnit),
+    fatigue_factors: Option<(f64, f64)>,
     rank: &dyn Fn(&StressTensor) -> Rank,
 ) -> Result<Option<Critical>, SourceProblem> {
     if c.source != Source::Section || !c.has_loads() {
         return Ok(None);
     }
     let s = section(c, n)?;
-    let (loads, pressure, k) = section_loads(c, n, elastic(c, n)?.nu);
+    let (typed, pressure, k) = section_loads(c, n, elastic(c, n)?.nu);
+    // The states searched are those the ranking judges: the state on screen's loads and
+    // factors for the static decision, the typed loads through Kf and Kfs in fatigue.
+    let (loads, k) = match fatigue_factors {
+        Some((kf, kfs)) => (
+            typed,
+            Concentration {
+                normal: kf,
+                shear: kfs,
+            },
+        ),
+        None => static_loads(c, n, typed, k, point(c, n, angle)),
+    };
     let to_unit = 1.0 / unit.pascals();
     let in_unit = |t: &StressTensor| match t.scaled(to_unit) {
         Ok(t) => rank(&t),
