@@ -466,7 +466,13 @@ mod tests {
         let (_, nf) = g.fatigue_point.unwrap();
         let on_screen = j.in_use_verdict().unwrap().factor.unwrap();
         let fatigue = j.fatigue.as_ref().unwrap().factor_in_use().unwrap();
-        assert!((ns.unwrap() - on_screen).abs() < 1e-6 * on_screen, "{ns:?} vs {on_screen}");
-        assert!((nf.unwrap() - fatigue).abs() < 1e-6 * fatigue, "{nf:?} vs {fatigue}");
+        assert!(
+            (ns.unwrap() - on_screen).abs() < 1e-6 * on_screen,
+            "{ns:?} vs {on_screen}"
+        );
+        assert!(
+            (nf.unwrap() - fatigue).abs() < 1e-6 * fatigue,
+            "{nf:?} vs {fatigue}"
+        );
     }
 }
