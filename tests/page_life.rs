@@ -3,12 +3,14 @@
 //! rainflow count and Miner's sum on the same numbers, checked in `life_reference.rs` against
 //! the `rainflow` and `fatpack` packages), the history in the case link and back, a refused
 //! value marking the results stale, the fatigue check's own cycle on the estimated line, and a
-//! stepped shaft under rotating bending and steady torque (Kf and Kfs by Neuber's equation,
+//! stepped shaft under rotating bending and steady torque (Kt and Kts from the shoulder's fits,
+//! a fillet outside a fit's range refused, Kf and Kfs by Neuber's equation at the fillet radius,
 //! both states, the fatigue factor and the life) against the beam and torsion formulas, and a
 //! rosette logger table's critical-plane damage and governing plane against core's rosette
 //! reduction, plane scan, rainflow count and Miner's sum.
 
 use std::fmt::Write as _;
+use stresscase_core::concentration::{self, Shape};
 use stresscase_core::critical_plane;
 use stresscase_core::damage::{HistoryLife, Miner};
 use stresscase_core::fatigue::{
@@ -152,14 +154,28 @@ fn the_fatigue_cycle_gets_a_life_on_the_estimated_line() {
 #[test]
 #[ignore = "needs the built page: run `cargo xtask test`"]
 fn a_stepped_shaft_under_rotating_bending_and_steady_torque() {
-    // The demo shaft: Ø40 mm at the fillet, N = 12 kN, T = 520 N·m, here Mz = 900 N·m. The user reads
-    // Kt = 1.9 and Kts = 1.5 for the shoulder fillet (r = 2 mm) from a chart and types them.
+    // The demo shaft: Ø40 mm at the fillet, N = 12 kN, T = 520 N·m, here Mz = 900 N·m; the
+    // shoulder steps up to Ø48 mm with a 2 mm fillet, so Kt and Kts come from the fits.
     let mut p = Page::open();
     p.b.click("src-section").unwrap();
     p.wait_for_id("in-kt");
     p.b.type_into("in-load-mz", "900").unwrap();
-    p.b.type_into("in-kt", "1.9").unwrap();
-    p.b.type_into("in-kts", "1.5").unwrap();
+    p.choose("kt-from", "shoulder");
+    p.wait_for_id("in-kt-big");
+    p.b.type_into("in-kt-big", "48").unwrap();
+    p.b.type_into("in-kt-r", "2").unwrap();
+    // The fits (checked in core against their published properties): with both N and a
+    // bending moment, the larger of the tension and bending fits.
+    let shape = Shape::ShaftShoulder {
+        big: 48.0,
+        small: 40.0,
+        r: 2.0,
+    };
+    let fitted = |l| concentration::kt(shape, l).unwrap().kt;
+    let kt = fitted(Loading::Axial).max(fitted(Loading::Bending));
+    let kts = fitted(Loading::Torsion);
+    p.wait_value("kt-fit", kt);
+    p.wait_value("kts-fit", kts);
     p.b.click("static-kt").unwrap(); // ductile steel: Kt not applied statically
     p.choose("material", "1045cd");
     p.b.click("fatigue-on").unwrap();
@@ -167,15 +183,16 @@ fn a_stepped_shaft_under_rotating_bending_and_steady_torque() {
     p.choose("cycle-kind", "loads");
     p.b.click("rotating-shaft").unwrap();
     p.choose("notch-q", "neuber");
-    p.b.type_into("in-nr", "2").unwrap();
     p.b.click("life-on").unwrap();
     p.wait_for_id("sn-line");
-    // Neuber's equation with Shigley's fit (checked in life_reference.rs).
+    // Neuber's equation with Shigley's fit (checked in life_reference.rs), at the fillet's
+    // radius: the shape gives it, so no notch radius is typed.
+    assert_eq!(p.text("String(document.getElementById('in-nr'))"), "null");
     let q = sensitivity(neuber_constant(SUT, Loading::Bending).unwrap(), 2.0).unwrap();
     let qs = sensitivity(neuber_constant(SUT, Loading::Torsion).unwrap(), 2.0).unwrap();
     let (kf, kfs) = (
-        fatigue_factor(1.9, q).unwrap(),
-        fatigue_factor(1.5, qs).unwrap(),
+        fatigue_factor(kt, q).unwrap(),
+        fatigue_factor(kts, qs).unwrap(),
     );
     p.wait_value("fat_q", q);
     p.wait_value("fat_qs", qs);
@@ -219,11 +236,35 @@ fn a_stepped_shaft_under_rotating_bending_and_steady_torque() {
         link.contains("cyc=loads")
             && link.contains("rot=on")
             && link.contains("nq=neuber")
-            && link.contains("skt=off"),
+            && link.contains("skt=off")
+            && link.contains("ktf=shoulder")
+            && link.contains("ktD=48")
+            && link.contains("ktr=2")
+            && !link.contains("nr="),
         "{link}"
     );
     p.no_console_errors();
     p.shot("life-shaft");
+    // The link opens the same case: the same factors from the same fits.
+    let mut q = Page::open_at("/", &link);
+    q.wait_value("kt-fit", kt);
+    q.wait_value("fat_kf", kf);
+    // A fillet too sharp for the torsion fit's range is refused with the range, and the
+    // factors and results go stale.
+    q.b.type_into("in-kt-r", "0.5").unwrap();
+    q.b.wait_for(
+        "document.getElementById('in-kt-r-msg').textContent.includes('0.25 to 4')",
+        std::time::Duration::from_secs(10),
+    )
+    .unwrap();
+    q.b.wait_for(
+        "document.getElementById('notch-fit').classList.contains('stale')",
+        std::time::Duration::from_secs(10),
+    )
+    .unwrap();
+    let v = q.axe_violations();
+    assert!(v.is_empty(), "axe-core: {v:#?}");
+    q.no_console_errors();
 }
 
 #[test]

@@ -21,6 +21,7 @@ extern crate alloc;
 #[cfg(any(feature = "std", test))]
 extern crate std;
 
+pub mod concentration;
 pub mod criteria;
 pub mod critical_plane;
 pub mod damage;

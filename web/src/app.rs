@@ -154,7 +154,7 @@ pub fn App() -> impl IntoView {
             </div>
             <div class="inputs">
                 <SourcePick form=form shown=shown/>
-                <SectionLoads form=form shown=shown/>
+                <SectionLoads form=form shown=shown stale=stale/>
                 <RosetteEntry form=form shown=shown stale=stale/>
                 <StrainEntry form=form shown=shown stale=stale/>
                 <StressEntry form=form shown=shown/>

@@ -155,6 +155,8 @@ pub struct Choices {
     pub rotating: bool,
     /// Where q and qs come from.
     pub notch_q: NotchQ,
+    /// Where Kt and Kts come from: typed, or a published fit for a notch's shape.
+    pub kt_from: KtFrom,
     /// Whether Kt and Kts raise the static state on screen (common practice: not for a ductile
     /// material; the default keeps the meaning of links written before this choice).
     pub static_kt: bool,
@@ -232,6 +234,36 @@ pub enum NotchQ {
     Neuber,
 }
 
+/// Where the section's Kt and Kts come from.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum KtFrom {
+    /// Typed by the user.
+    #[default]
+    Typed,
+    /// A round bar stepped down to the section's diameter, with a shoulder fillet.
+    Shoulder,
+    /// A round bar with a U-groove whose root is the section's diameter.
+    Groove,
+    /// A flat bar stepped on both edges down to the section's depth h, with shoulder fillets.
+    FlatShoulder,
+    /// A plate with a central hole; the section is the net section through the hole.
+    Hole,
+}
+
+impl KtFrom {
+    /// Whether the shape is a round bar (it needs a solid round section).
+    #[must_use]
+    pub fn round(self) -> bool {
+        matches!(self, Self::Shoulder | Self::Groove)
+    }
+
+    /// Whether the shape has a fillet or groove radius typed beside it.
+    #[must_use]
+    pub fn has_radius(self) -> bool {
+        matches!(self, Self::Shoulder | Self::Groove | Self::FlatShoulder)
+    }
+}
+
 /// Where the endurance limit comes from.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
 pub enum Endurance {
@@ -276,6 +308,7 @@ impl Default for Choices {
             mean_stress: MeanStressPick::Goodman,
             rotating: false,
             notch_q: NotchQ::Typed,
+            kt_from: KtFrom::Typed,
             static_kt: true,
         }
     }
@@ -416,7 +449,7 @@ impl Choices {
 /// Token tables for the choices, shared by the link writer and reader and the page's selects.
 pub mod tokens {
     use super::{
-        Condition, Cycle, ElasticFrom, Endurance, Layout, LifeOf, MeanStressPick, NotchQ,
+        Condition, Cycle, ElasticFrom, Endurance, KtFrom, Layout, LifeOf, MeanStressPick, NotchQ,
         SectionKind, SnFrom, Source, Surface,
     };
     use stresscase_core::criteria::Criterion;
@@ -498,6 +531,14 @@ pub mod tokens {
     ];
     /// `nq`: where q and qs come from.
     pub const NOTCH_Q: [(NotchQ, &str); 2] = [(NotchQ::Typed, "typed"), (NotchQ::Neuber, "neuber")];
+    /// `ktf`: where Kt and Kts come from.
+    pub const KT_FROM: [(KtFrom, &str); 5] = [
+        (KtFrom::Typed, "typed"),
+        (KtFrom::Shoulder, "shoulder"),
+        (KtFrom::Groove, "groove"),
+        (KtFrom::FlatShoulder, "flat-shoulder"),
+        (KtFrom::Hole, "hole"),
+    ];
     /// `sem`.
     pub const ENDURANCE: [(Endurance, &str); 2] = [
         (Endurance::Estimate, "estimate"),
@@ -581,6 +622,15 @@ mod tests {
         }
         for v in [NotchQ::Typed, NotchQ::Neuber] {
             assert!(has(tokens::token(&tokens::NOTCH_Q, v)), "{v:?}");
+        }
+        for v in [
+            KtFrom::Typed,
+            KtFrom::Shoulder,
+            KtFrom::Groove,
+            KtFrom::FlatShoulder,
+            KtFrom::Hole,
+        ] {
+            assert!(has(tokens::token(&tokens::KT_FROM, v)), "{v:?}");
         }
     }
 }

@@ -7,7 +7,7 @@
 //! point of having one.)
 
 use super::choices::{
-    Choices, Condition, Cycle, Endurance, Layout, MaterialPick, MeanStressPick, NotchQ,
+    Choices, Condition, Cycle, Endurance, KtFrom, Layout, MaterialPick, MeanStressPick, NotchQ,
     SectionKind, SnFrom, Source,
 };
 use stresscase_core::section::Face;
@@ -230,10 +230,20 @@ inputs! {
         |c| on_section(c, &[SolidRound, Tube]);
     /// Normal-stress concentration factor.
     Kt: "kt", "in-kt", Fixed("Kt (normal)"), Ratio, "1", needed, Concentration,
-        |c| on_section(c, LOADED);
-    /// Shear-stress concentration factor.
+        |c| on_section(c, LOADED) && c.kt_from == KtFrom::Typed;
+    /// Shear-stress concentration factor (typed also with a flat bar's shape: no fit for its
+    /// torsion).
     Kts: "kts", "in-kts", Fixed("Kts (shear)"), Ratio, "1", needed, Concentration,
-        |c| on_section(c, LOADED);
+        |c| on_section(c, LOADED) && !c.kt_from.round();
+    /// The notch's larger size: a stepped or grooved bar's diameter D, a flat bar's width H.
+    KtBig: "ktD", "in-kt-big", Choice(kt_big_label), Length, "48", needed, Concentration,
+        |c| on_section(c, LOADED) && c.kt_from.has_radius();
+    /// The fillet or groove root radius.
+    KtR: "ktr", "in-kt-r", Choice(kt_radius_label), Length, "2", needed, Concentration,
+        |c| on_section(c, LOADED) && c.kt_from.has_radius();
+    /// The hole's diameter in a plate.
+    KtHole: "kth", "in-kt-hole", Fixed("hole diameter"), Length, "10", needed, Concentration,
+        |c| on_section(c, LOADED) && c.kt_from == KtFrom::Hole;
     /// Point angle φ on a round section.
     Phi: "phi", "in-phi", Fixed("point angle φ"), Angle, "180", needed, Point,
         |c| on_section(c, &[SolidRound, Tube]);
@@ -407,7 +417,7 @@ inputs! {
         |c| c.notch_fatigue() && c.notch_q == NotchQ::Typed;
     /// Notch root radius, for Neuber's equation.
     NotchR: "nr", "in-nr", Fixed("notch root radius r"), Length, "2", needed, Notch,
-        |c| c.notch_fatigue() && c.notch_q == NotchQ::Neuber;
+        |c| c.notch_fatigue() && c.notch_q == NotchQ::Neuber && c.kt_from == KtFrom::Typed;
     // The life in cycles (judge/life.rs).
     /// Fatigue strength fraction f at 10³ cycles, typed.
     LifeF: "lf", "in-lf", Fixed("strength fraction f at 10³ cycles"), Ratio, "0.9", needed, LifeLine,
@@ -485,6 +495,21 @@ fn pressure_label(c: &Choices) -> String {
     match c.kind {
         SectionKind::ThinCylinder | SectionKind::ThinSphere => "internal pressure p".into(),
         _ => "internal pressure pi".into(),
+    }
+}
+
+fn kt_big_label(c: &Choices) -> String {
+    match c.kt_from {
+        KtFrom::Groove => "bar diameter D outside the groove".into(),
+        KtFrom::FlatShoulder => "wider width H (the section's depth h is the narrower)".into(),
+        _ => "larger diameter D (the section's d is the smaller)".into(),
+    }
+}
+
+fn kt_radius_label(c: &Choices) -> String {
+    match c.kt_from {
+        KtFrom::Groove => "groove root radius r".into(),
+        _ => "fillet radius r".into(),
     }
 }
 

@@ -9,8 +9,11 @@ use super::inputs::Num;
 use stresscase_core::hooke::{Elastic, ElasticError};
 use stresscase_core::{AngleUnit, StressTensor, StressUnit};
 
+mod notch_shape;
 mod rosette;
 mod section;
+
+pub use notch_shape::{factors as shape_factors, ShapeFactors};
 
 pub use section::fatigue_states;
 mod strain;

@@ -260,6 +260,29 @@ pub fn assumptions(e: &Evaluation) -> Vec<String> {
             ));
         }
     }
+    if let Some(crate::model::source::Outcome::Section(s)) = &e.outcome {
+        if let Some(f) = &s.shape {
+            use crate::model::numfmt::format_sig;
+            let line = |name: &str, fit: &stresscase_core::concentration::Fitted| {
+                format!(
+                    "{name} = {} from the fit for a {} at {} = {} (its range {} to {}).",
+                    format_sig(fit.kt, 4),
+                    fit.source,
+                    fit.ratio,
+                    format_sig(fit.value, 3),
+                    fit.range.0,
+                    fit.range.1
+                )
+            };
+            if let Some((_, fit)) = &f.normal {
+                v.push(line("Kt", fit));
+            }
+            if let Some(fit) = &f.shear {
+                v.push(line("Kts", fit));
+            }
+            v.extend(f.notes.iter().map(|n| (*n).to_string()));
+        }
+    }
     if e.choices.source == crate::model::choices::Source::Section && e.choices.has_loads() {
         v.push(if e.choices.static_kt {
             "Kt and Kts raise the state on screen and the static check.".into()
@@ -280,13 +303,14 @@ pub fn assumptions(e: &Evaluation) -> Vec<String> {
 }
 
 /// The published sources behind the checks on the sheet.
-pub const SOURCES: [&str; 8] = [
+pub const SOURCES: [&str; 9] = [
     "Principal stresses, transformation, Mohr's circles, invariants: Timoshenko & Goodier, Theory of Elasticity; Gere & Goodno, Mechanics of Materials; Malvern, Introduction to the Mechanics of a Continuous Medium.",
     "Equivalent stresses and the Lode angle: Boresi & Schmidt, Advanced Mechanics of Materials; Bai & Wierzbicki (2008).",
     "Sections and vessels: beam theory and VQ/(It) (Gere & Goodno); Saint-Venant torsion of rectangles and Lamé's thick cylinder (Timoshenko & Goodier).",
     "Rosettes and Hooke's law: Gere & Goodno; transverse sensitivity after the gauge makers' published correction.",
     "Static criteria and factors of safety: Shigley's Mechanical Engineering Design, ch. 5.",
     "Fatigue criteria, Se′ and Marin factors: Shigley's Mechanical Engineering Design, ch. 6.",
+    "Stress concentration: Pilkey & Pilkey, Peterson's Stress Concentration Factors, 3rd ed. (2008), the curve fits to the charts; notch sensitivity: Neuber's equation with Shigley's fit (ch. 6).",
     "Life: Shigley's Mechanical Engineering Design, 9th ed., §6-7 and §6-14 (S–N line, mean-stress corrections); ASTM E1049-85 (2017) §5.4.4 (rainflow); Miner (1945).",
     "Unit factors: NIST SP 811.",
 ];

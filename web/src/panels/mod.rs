@@ -12,6 +12,7 @@ pub mod headline;
 pub mod life_check;
 pub mod link_notice;
 pub mod mohr_diagram;
+pub mod notch_shape;
 pub mod number_field;
 pub mod plane_probe;
 pub mod plot;

@@ -9,6 +9,7 @@ use crate::model::inputs::{Num, Place};
 use crate::model::numfmt::format_for_entry;
 use crate::model::source::{self, Outcome};
 use crate::panels::choice_select::ChoiceSelect;
+use crate::panels::notch_shape::{FittedFactors, NotchShape};
 use crate::panels::number_field::SourceFields;
 use crate::panels::section_sketch::SectionSketch;
 use leptos::prelude::*;
@@ -45,7 +46,11 @@ fn to_surface(form: &mut CaseForm, outer: bool) {
 
 /// The panel (shown when the stress comes from loads on a section).
 #[component]
-pub fn SectionLoads(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
+pub fn SectionLoads(
+    form: RwSignal<CaseForm>,
+    shown: Memo<Option<Evaluation>>,
+    stale: Memo<bool>,
+) -> impl IntoView {
     let on = Memo::new(move |_| form.with(|f| f.choices.source == Source::Section));
     let kind = Memo::new(move |_| form.with(|f| f.choices.kind));
     let kinds: Vec<(&'static str, &'static str)> = tokens::KIND
@@ -121,7 +126,9 @@ pub fn SectionLoads(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -
                     })}
                     {(!thin).then(|| view! {
                         <h3>"Stress concentration at the point"</h3>
+                        <NotchShape form=form/>
                         <SourceFields form=form place=Place::Concentration/>
+                        <FittedFactors form=form shown=shown stale=stale/>
                         <label class="check">
                             <input type="checkbox" id="static-kt" prop:checked=move || form.with(|f| f.choices.static_kt)
                                 on:change:target=move |ev| form.update(|f| f.choices.static_kt = ev.target().checked())/>

@@ -4,7 +4,7 @@
 
 use super::LinkError;
 use crate::model::choices::{
-    tokens, Choices, Cycle, Endurance, Layout, MaterialPick, NotchQ, Source, MAX_GAUGES,
+    tokens, Choices, Cycle, Endurance, KtFrom, Layout, MaterialPick, NotchQ, Source, MAX_GAUGES,
 };
 use stresscase_core::material;
 use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit, StrainUnit};
@@ -12,10 +12,10 @@ use stresscase_core::vessel::Ends;
 use stresscase_core::StressUnit;
 
 /// Choice keys of the source paths, in link order.
-pub(super) const CHOICE_KEYS: [&str; 32] = [
+pub(super) const CHOICE_KEYS: [&str; 33] = [
     "src", "kind", "lu", "fu", "mu", "pu", "ends", "face", "surf", "layout", "ng", "su", "tsc",
     "cond", "eu", "mat", "msu", "crit", "fat", "cyc", "sem", "fsurf", "fload", "ec", "fcrit",
-    "life", "lof", "sn", "msc", "rot", "nq", "skt",
+    "life", "lof", "sn", "msc", "rot", "nq", "skt", "ktf",
 ];
 
 /// The choice keys a case uses, with their values, in link order.
@@ -43,6 +43,10 @@ pub(super) fn choice_pairs(c: &Choices) -> Vec<(&'static str, String)> {
             }
             if matches!(c.kind, K::ThinCylinder | K::ThinSphere) {
                 v.push(("surf", tokens::token(&tokens::SURFACE, c.surface).into()));
+            }
+            // Written only when a shape is chosen: absent means typed.
+            if c.has_loads() && c.kt_from != KtFrom::Typed {
+                v.push(("ktf", tokens::token(&tokens::KT_FROM, c.kt_from).into()));
             }
             // Written only when off: absent means on, the meaning of links before it.
             if c.has_loads() && !c.static_kt {
@@ -367,6 +371,13 @@ pub(super) fn read_choices<'a>(
             &tokens::NOTCH_Q,
             "typed, neuber",
             d.notch_q,
+        )?,
+        kt_from: pick(
+            "ktf",
+            take("ktf"),
+            &tokens::KT_FROM,
+            "typed, shoulder, groove, flat-shoulder, hole",
+            d.kt_from,
         )?,
         static_kt: pick("skt", take("skt"), &[(false, "off")], "off", d.static_kt)?,
     };

@@ -175,6 +175,7 @@ fn arb_choices() -> impl Strategy<Value = Choices> {
             any::<bool>(),
             0usize..2,
             any::<bool>(),
+            0usize..5,
         ),
     )
         .prop_map(
@@ -183,7 +184,7 @@ fn arb_choices() -> impl Strategy<Value = Choices> {
                 (ends, face, surf, layout, ng),
                 (su, tsc, cond, eu, ec, fcrit),
                 (mat, msu, crit, fat, cyc, sem, fin, load),
-                (life, lof, sn, msc, rot, nq, skt),
+                (life, lof, sn, msc, rot, nq, skt, ktf),
             )| {
                 Choices {
                     source: tokens::SOURCE[src].0,
@@ -234,6 +235,7 @@ fn arb_choices() -> impl Strategy<Value = Choices> {
                     rotating: rot,
                     notch_q: tokens::NOTCH_Q[nq].0,
                     static_kt: skt,
+                    kt_from: tokens::KT_FROM[ktf].0,
                 }
             },
         )
@@ -310,6 +312,9 @@ fn arb_choices() -> impl Strategy<Value = Choices> {
             }
             if !used.contains(&"nq") {
                 c.notch_q = d.notch_q;
+            }
+            if !used.contains(&"ktf") {
+                c.kt_from = d.kt_from;
             }
             if !used.contains(&"skt") {
                 c.static_kt = d.static_kt;

@@ -4,9 +4,9 @@
 //! `stresscase-core`.
 
 use super::strength::is_steel;
-use crate::model::choices::{Choices, Cycle, Endurance, NotchQ};
+use crate::model::choices::{Choices, Cycle, Endurance, KtFrom, NotchQ};
 use crate::model::inputs::Num;
-use crate::model::source::{self, problem, Numbers, SourceProblem};
+use crate::model::source::{self, problem, shape_factors, Numbers, SourceProblem};
 use stresscase_core::fatigue::{self, FatigueCriterion, FatigueError, Loading, Marin};
 use stresscase_core::material::Strengths;
 use stresscase_core::notch;
@@ -65,27 +65,34 @@ fn notch_factors(
     sut: f64,
     unit: StressUnit,
 ) -> Result<NotchFactors, SourceProblem> {
-    let (kt, kts) = (n.get(Num::Kt), n.get(Num::Kts));
+    let shape = shape_factors(c, n)?;
+    let (kt, kts) = (shape.kt, shape.kts);
     let (q, qs, neuber) = match c.notch_q {
         NotchQ::Typed => (n.get(Num::Q), n.get(Num::Qs), None),
         NotchQ::Neuber => {
             let sut_mpa = unit.convert(sut, StressUnit::MPa);
-            let r_mm = n.get(Num::NotchR) * c.length.metres() * 1000.0;
-            let constant = |l| {
-                notch::neuber_constant(sut_mpa, l).map_err(|e| problem(Num::NotchR, e.to_string()))
+            // The shape's own radius when Kt comes from a fit, else the typed one.
+            let (r, r_num) = match shape.radius {
+                Some(r) if c.kt_from == KtFrom::Hole => (r, Num::KtHole),
+                Some(r) => (r, Num::KtR),
+                None => (n.get(Num::NotchR), Num::NotchR),
             };
+            let r_mm = r * c.length.metres() * 1000.0;
+            let constant =
+                |l| notch::neuber_constant(sut_mpa, l).map_err(|e| problem(r_num, e.to_string()));
             let (a, a_s) = (constant(Loading::Bending)?, constant(Loading::Torsion)?);
-            let q =
-                |a| notch::sensitivity(a, r_mm).map_err(|e| problem(Num::NotchR, e.to_string()));
+            let q = |a| notch::sensitivity(a, r_mm).map_err(|e| problem(r_num, e.to_string()));
             (q(a)?, q(a_s)?, Some((a, a_s)))
         }
     };
     let kf = notch::fatigue_factor(kt, q).map_err(|e| {
         problem(
-            if (0.0..=1.0).contains(&q) {
-                Num::Kt
-            } else {
+            if !(0.0..=1.0).contains(&q) {
                 Num::Q
+            } else if c.kt_from != KtFrom::Typed {
+                Num::KtBig
+            } else {
+                Num::Kt
             },
             e.to_string(),
         )

@@ -3,7 +3,7 @@
 //! spheres. Inputs converted to SI here; results back in the case's units.
 
 use super::{elastic, overflow, problem, Numbers, Outcome, SourceProblem};
-use crate::model::choices::{Choices, SectionKind, Source, Surface};
+use crate::model::choices::{Choices, KtFrom, SectionKind, Source, Surface};
 use crate::model::inputs::Num;
 use stresscase_core::section::{
     Concentration, Critical, Loads, Location, Path, Pressure, Properties, Rank, Rectangle, Round,
@@ -25,6 +25,8 @@ pub struct SectionOutcome {
     pub vessel_surfaces: Option<[f64; 2]>,
     /// Warnings to show (each says whether it is common practice).
     pub warnings: Vec<&'static str>,
+    /// Kt and Kts from the notch's shape and their fits; None when typed.
+    pub shape: Option<Box<super::ShapeFactors>>,
 }
 
 /// Loads on a section or a vessel: the tensor at the chosen point (in `unit`), the scan and the
@@ -43,7 +45,7 @@ pub fn evaluate(
         return thin_vessel(c, n, unit);
     }
     let s = section(c, n)?;
-    let (loads, pressure, k) = section_loads(c, n, elastic(c, n)?.nu);
+    let (loads, pressure, k) = section_loads(c, n, elastic(c, n)?.nu)?;
     let at = point(c, n, angle);
     let (loads, k) = static_loads(c, n, loads, k, at);
     let tensor = s
@@ -71,6 +73,9 @@ pub fn evaluate(
             scan: Some(scan_in_units(scan, unit, c.length)),
             vessel_surfaces: None,
             warnings,
+            shape: (c.kt_from != KtFrom::Typed)
+                .then(|| super::notch_shape::factors(c, n).map(Box::new))
+                .transpose()?,
         }),
     ))
 }
@@ -185,7 +190,7 @@ pub fn fatigue_states(
     kfs: f64,
 ) -> Result<(StressTensor, Option<(StressTensor, StressTensor)>), SourceProblem> {
     let s = section(c, n)?;
-    let (loads, pressure, _) = section_loads(c, n, elastic(c, n)?.nu);
+    let (loads, pressure, _) = section_loads(c, n, elastic(c, n)?.nu)?;
     let at = point(c, n, angle);
     let k = Concentration {
         normal: kf,
@@ -287,8 +292,12 @@ pub fn section(c: &Choices, n: &impl Numbers) -> Result<Section, SourceProblem> 
     s.map_err(|e| section_problem(e, c))
 }
 
-/// Loads, pressure and factors in SI.
-fn section_loads(c: &Choices, n: &impl Numbers, nu: f64) -> (Loads, Pressure, Concentration) {
+/// Loads, pressure and factors (typed, or from the notch's shape) in SI.
+fn section_loads(
+    c: &Choices,
+    n: &impl Numbers,
+    nu: f64,
+) -> Result<(Loads, Pressure, Concentration), SourceProblem> {
     let p = c.pressure.pascals();
     let loads = loads_in_si(c, n, [Num::N, Num::My, Num::Mz, Num::T, Num::Vy, Num::Vz]);
     let pressure = match c.kind {
@@ -306,11 +315,12 @@ fn section_loads(c: &Choices, n: &impl Numbers, nu: f64) -> (Loads, Pressure, Co
         },
         _ => Pressure::NONE,
     };
+    let f = super::notch_shape::factors(c, n)?;
     let k = Concentration {
-        normal: n.get(Num::Kt),
-        shear: n.get(Num::Kts),
+        normal: f.kt,
+        shear: f.kts,
     };
-    (loads, pressure, k)
+    Ok((loads, pressure, k))
 }
 
 /// The location of the chosen point, in metres and radians.
@@ -349,7 +359,7 @@ pub fn governing(
         return Ok(None);
     }
     let s = section(c, n)?;
-    let (typed, pressure, k) = section_loads(c, n, elastic(c, n)?.nu);
+    let (typed, pressure, k) = section_loads(c, n, elastic(c, n)?.nu)?;
     // The states searched are those the ranking judges: the state on screen's loads and
     // factors for the static decision, the typed loads through Kf and Kfs in fatigue.
     let (loads, k) = match fatigue_factors {
@@ -430,6 +440,7 @@ fn thin_vessel(
             scan: None,
             vessel_surfaces: Some([vm(&outer), vm(&inner)]),
             warnings,
+            shape: None,
         }),
     ))
 }
