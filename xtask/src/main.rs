@@ -369,7 +369,12 @@ fn bench() -> Result {
     setup(true)?;
     build_page()?;
     let dist = root().join("dist").display().to_string();
-    for bench in ["page_table_speed", "page_keystroke", "page_life_speed"] {
+    for bench in [
+        "page_start",
+        "page_table_speed",
+        "page_keystroke",
+        "page_life_speed",
+    ] {
         run_env(
             &cargo(),
             &["bench", "-p", "stresscase-tests", "--bench", bench],
