@@ -28,8 +28,9 @@
 //! Kt = C1 + C2·(2t/D) + C3·(2t/D)² + C4·(2t/D)³, Ci = ai + bi·√(t/r) + ci·(t/r),
 //! valid over the range of t/r stated with each; the plate with a hole is
 //! Kt = 2 + 0.284·(1 − d/W) − 0.600·(1 − d/W)² + 1.32·(1 − d/W)³ for d/W ≤ 0.9 (Kirsch's 3 as
-//! d/W → 0). Outside a fit's range the factor is refused with the range; the fits reproduce the
-//! charts to within a few percent inside it.
+//! d/W → 0). Outside a fit's range the factor is refused with the range, and so is a notch so
+//! deep (2t/D near 1, beyond the charts) that the fit falls below 1; the fits reproduce the
+//! charts to within a few percent inside their ranges.
 
 use core::fmt;
 
@@ -94,6 +95,13 @@ pub enum ConcentrationError {
     },
     /// No fit for this loading of this shape; names the shape.
     NoFit(&'static str),
+    /// The fit gives Kt below 1: the notch is deeper (2t/D nearer 1) than the charts reach.
+    BeyondCharts {
+        /// The fit's value.
+        kt: f64,
+        /// 2t/D here.
+        depth: f64,
+    },
 }
 
 impl fmt::Display for ConcentrationError {
@@ -112,6 +120,10 @@ impl fmt::Display for ConcentrationError {
             Self::NoFit(s) => write!(
                 f,
                 "the fits for {s} do not cover this loading — type the factor instead"
+            ),
+            Self::BeyondCharts { kt, depth } => write!(
+                f,
+                "the fit gives Kt = {kt:.3}, below 1, at 2t/D = {depth:.3}: a notch this deep lies beyond the charts — type Kt instead"
             ),
         }
     }
@@ -375,9 +387,9 @@ fn positive(v: f64, msg: &'static str) -> Result<f64, ConcentrationError> {
 /// Kt (Kts for [`Loading::Torsion`]) of `shape` under `loading`, from the shape's fit.
 ///
 /// # Errors
-/// [`ConcentrationError`] for unusable dimensions, a ratio outside the fit's range, or a
-/// loading the shape has no fit for (torsion of a flat bar; bending or torsion of a plate with a
-/// hole).
+/// [`ConcentrationError`] for unusable dimensions, a ratio outside the fit's range, a notch so
+/// deep that the fit falls below 1, or a loading the shape has no fit for (torsion of a flat
+/// bar; bending or torsion of a plate with a hole).
 pub fn kt(shape: Shape, loading: Loading) -> Result<Fitted, ConcentrationError> {
     let (big, small, r, fit) = match shape {
         Shape::PlateHole { width, hole } => {
@@ -446,14 +458,16 @@ pub fn kt(shape: Shape, loading: Loading) -> Result<Fitted, ConcentrationError> 
     let t = (big - small) / 2.0;
     let x = t / r;
     let (lo, hi) = fit.range();
-    let kt = fit
-        .at(x, 2.0 * t / big)
-        .ok_or(ConcentrationError::Outside {
-            ratio: "t/r",
-            value: x,
-            lo,
-            hi,
-        })?;
+    let depth = 2.0 * t / big;
+    let kt = fit.at(x, depth).ok_or(ConcentrationError::Outside {
+        ratio: "t/r",
+        value: x,
+        lo,
+        hi,
+    })?;
+    if kt < 1.0 {
+        return Err(ConcentrationError::BeyondCharts { kt, depth });
+    }
     Ok(Fitted {
         kt,
         ratio: "t/r",
@@ -624,6 +638,24 @@ mod tests {
                 assert!(ks[0] > 1.0);
             }
         }
+    }
+
+    #[test]
+    fn a_notch_deeper_than_the_charts_is_refused_not_given_kt_below_one() {
+        // A groove of t/r = 7.75 taking 99 % of the diameter: the bending fit gives 0.93.
+        let e = kt(
+            Shape::ShaftGroove {
+                big: 100.0,
+                small: 1.0,
+                r: 49.5 / 7.75,
+            },
+            Loading::Bending,
+        )
+        .unwrap_err();
+        assert!(
+            matches!(e, ConcentrationError::BeyondCharts { kt, .. } if kt < 1.0),
+            "{e:?}"
+        );
     }
 
     #[test]
