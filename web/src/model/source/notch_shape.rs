@@ -178,14 +178,8 @@ pub fn factors(c: &Choices, n: &impl Numbers) -> Result<ShapeFactors, SourceProb
 #[cfg(test)]
 mod tests {
     use super::*;
-    use std::collections::HashMap;
-
-    struct Nums(HashMap<Num, f64>);
-    impl Numbers for Nums {
-        fn get(&self, n: Num) -> f64 {
-            self.0.get(&n).copied().unwrap_or(0.0)
-        }
-    }
+    use crate::model::source::test_numbers::Map as Nums;
+    use std::collections::BTreeMap;
 
     fn shaft(pairs: &[(Num, f64)]) -> (Choices, Nums) {
         let c = Choices {
@@ -194,7 +188,7 @@ mod tests {
             kt_from: KtFrom::Shoulder,
             ..Choices::default()
         };
-        let mut m: HashMap<Num, f64> = [
+        let mut m: BTreeMap<Num, f64> = [
             (Num::D, 40.0),
             (Num::KtBig, 60.0),
             (Num::KtR, 4.0),

@@ -45,7 +45,11 @@ pub fn evaluate(
         return thin_vessel(c, n, unit);
     }
     let s = section(c, n)?;
-    let (loads, pressure, k) = section_loads(c, n, elastic(c, n)?.nu)?;
+    let (loads, pressure, shape) = section_loads(c, n, elastic(c, n)?.nu)?;
+    let k = Concentration {
+        normal: shape.kt,
+        shear: shape.kts,
+    };
     let at = point(c, n, angle);
     let (loads, k) = static_loads(c, n, loads, k, at);
     let tensor = s
@@ -73,9 +77,7 @@ pub fn evaluate(
             scan: Some(scan_in_units(scan, unit, c.length)),
             vessel_surfaces: None,
             warnings,
-            shape: (c.kt_from != KtFrom::Typed)
-                .then(|| super::notch_shape::factors(c, n).map(Box::new))
-                .transpose()?,
+            shape: (c.kt_from != KtFrom::Typed).then(|| Box::new(shape)),
         }),
     ))
 }
@@ -292,12 +294,12 @@ pub fn section(c: &Choices, n: &impl Numbers) -> Result<Section, SourceProblem> 
     s.map_err(|e| section_problem(e, c))
 }
 
-/// Loads, pressure and factors (typed, or from the notch's shape) in SI.
+/// Loads and pressure in SI, and Kt and Kts (typed, or from the notch's shape).
 fn section_loads(
     c: &Choices,
     n: &impl Numbers,
     nu: f64,
-) -> Result<(Loads, Pressure, Concentration), SourceProblem> {
+) -> Result<(Loads, Pressure, super::ShapeFactors), SourceProblem> {
     let p = c.pressure.pascals();
     let loads = loads_in_si(c, n, [Num::N, Num::My, Num::Mz, Num::T, Num::Vy, Num::Vz]);
     let pressure = match c.kind {
@@ -315,12 +317,7 @@ fn section_loads(
         },
         _ => Pressure::NONE,
     };
-    let f = super::notch_shape::factors(c, n)?;
-    let k = Concentration {
-        normal: f.kt,
-        shear: f.kts,
-    };
-    Ok((loads, pressure, k))
+    Ok((loads, pressure, super::notch_shape::factors(c, n)?))
 }
 
 /// The location of the chosen point, in metres and radians.
@@ -359,7 +356,11 @@ pub fn governing(
         return Ok(None);
     }
     let s = section(c, n)?;
-    let (typed, pressure, k) = section_loads(c, n, elastic(c, n)?.nu)?;
+    let (typed, pressure, shape) = section_loads(c, n, elastic(c, n)?.nu)?;
+    let k = Concentration {
+        normal: shape.kt,
+        shear: shape.kts,
+    };
     // The states searched are those the ranking judges: the state on screen's loads and
     // factors for the static decision, the typed loads through Kf and Kfs in fatigue.
     let (loads, k) = match fatigue_factors {
