@@ -243,6 +243,16 @@ fn a_stepped_shaft_under_rotating_bending_and_steady_torque() {
             && !link.contains("nr="),
         "{link}"
     );
+    // The calc sheet names the shape and each fitted factor with its source.
+    let sheet = p.text(
+        "document.getElementById('sheet-head').textContent + document.getElementById('sheet-tail').textContent",
+    );
+    assert!(
+        sheet.contains("Kt and Kts from")
+            && sheet.contains("a shoulder fillet on a round bar")
+            && sheet.contains("Peterson's SCF"),
+        "{sheet}"
+    );
     p.no_console_errors();
     p.shot("life-shaft");
     // The link opens the same case: the same factors from the same fits.

@@ -72,6 +72,13 @@ pub fn inputs(f: &CaseForm, e: &Evaluation) -> Vec<InputLine> {
         (label, value)
     };
     let mut v = vec![("where the stress comes from".to_string(), choice_text(f))];
+    let c = &f.choices;
+    if c.section_with_loads() && c.kt_from != crate::model::choices::KtFrom::Typed {
+        v.push((
+            "Kt and Kts from".into(),
+            crate::panels::notch_shape::from_text(c.kt_from).into(),
+        ));
+    }
     for field in Field::STRESS {
         if f.is_active(field) {
             v.push(line(f.label(field), f.text(field), f.unit_of(field)));

@@ -13,7 +13,8 @@ use leptos::prelude::*;
 use stresscase_core::concentration::Fitted;
 use stresscase_core::fatigue::Loading;
 
-fn from_text(k: KtFrom) -> &'static str {
+/// What the choice reads, for the select and the calc sheet.
+pub(crate) fn from_text(k: KtFrom) -> &'static str {
     match k {
         KtFrom::Typed => "typed below",
         KtFrom::Shoulder => "a shoulder fillet on a round bar",
