@@ -264,14 +264,16 @@ pub fn principal_values_into(
     for (ts, os) in tensors.chunks(LANES).zip(out.chunks_mut(LANES)) {
         let mut comps = [STAND_IN; LANES];
         let mut inside = [false; LANES];
+        let mut sizes = [1.0; LANES];
         for (i, t) in ts.iter().enumerate() {
             let c = t.components();
-            if (1e-50..=1e50).contains(&max_abs(&c)) {
+            let size = max_abs(&c);
+            if (1e-50..=1e50).contains(&size) {
                 comps[i] = c;
                 inside[i] = true;
+                sizes[i] = size;
             }
         }
-        let sizes: [f64; LANES] = core::array::from_fn(|i| max_abs(&comps[i]));
         let mut found = [[0.0; 3]; LANES];
         let mut ok = [false; LANES];
         for i in 0..LANES {

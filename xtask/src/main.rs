@@ -381,6 +381,7 @@ fn bench() -> Result {
         "page_start",
         "page_lighthouse",
         "page_table_speed",
+        "page_kernel_speed",
         "page_keystroke",
         "page_life_speed",
     ] {
