@@ -53,7 +53,7 @@ fn a_material_gives_factors_of_safety_and_envelopes() {
     assert!(p
         .text("document.getElementById('verdict-caution').textContent")
         .contains("licensed engineer"));
-    let link = p.text("location.hash");
+    let link = p.link();
     assert!(
         link.contains("mat=1045cd") && link.contains("crit=tresca"),
         "{link}"
@@ -108,7 +108,7 @@ fn fatigue_check_shows_factors_and_the_diagram() {
         p.text("Array.from(document.querySelectorAll('#fatigue-svg polyline')).map(l => l.dataset.criterion).join(',')"),
         "goodman,gerber,asme,soderberg,langer"
     );
-    let link = p.text("location.hash");
+    let link = p.link();
     assert!(link.contains("fat=on") && link.contains("R=0"), "{link}");
     p.no_console_errors();
     p.shot("fatigue");

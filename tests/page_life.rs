@@ -83,7 +83,7 @@ fn a_pasted_history_gives_its_cycles_damage_and_life() {
         m.total,
     );
     // The history travels in the case link and reads back the same.
-    let link = p.text("location.hash");
+    let link = p.link();
     assert!(
         link.contains("life=on")
             && link.contains("lof=history")
@@ -142,7 +142,7 @@ fn the_fatigue_cycle_gets_a_life_on_the_estimated_line() {
         }
         other => panic!("pick a stress with a finite life, not {other:?}"),
     }
-    let link = p.text("location.hash");
+    let link = p.link();
     assert!(
         link.contains("life=on") && !link.contains("hist="),
         "{link}"
@@ -231,7 +231,7 @@ fn a_stepped_shaft_under_rotating_bending_and_steady_torque() {
         )
     };
     p.wait_value("life_n", n);
-    let link = p.text("location.hash");
+    let link = p.link();
     assert!(
         link.contains("cyc=loads")
             && link.contains("rot=on")
@@ -334,7 +334,7 @@ fn a_rosette_logger_tables_critical_plane_damage() {
         p.wait_value("hist_hours", r * 4.0 / 3600.0);
     }
     // Not in the link: the link says lof=table and holds no values.
-    let link = p.text("location.hash");
+    let link = p.link();
     assert!(
         link.contains("lof=table") && !link.contains("hist="),
         "{link}"

@@ -202,6 +202,7 @@ fn check_sheet(p: &mut Page, name: &str) -> u32 {
     let title = p.text("document.querySelector('.sheet-title').textContent");
     let link = p.text("document.getElementById('sheet-link').textContent");
     assert!(link.contains("#v=1&"), "{link}");
+    p.link();
     assert_eq!(link, p.text("location.href"));
     let s1 = p.text("document.querySelector('#headline [data-key=\"sigma1\"]').textContent");
     let n = p.text("document.querySelector('#headline [data-key=\"n_static\"]').textContent");
@@ -361,6 +362,7 @@ fn drawings_export_as_svg_and_png_and_results_as_csv() {
     let csv_text = String::from_utf8(p.downloaded("stresscase-results.csv")).unwrap();
     std::fs::write(dir.join("stresscase-results.csv"), &csv_text).unwrap();
     let (head, body) = csv_text.split_once('\n').unwrap();
+    p.link();
     let href = p.text("location.href");
     assert_eq!(head, format!("# Stresscase results; case link: {href}"));
     let mut r = csv::Reader::from_reader(body.as_bytes());

@@ -67,7 +67,7 @@ fn the_chosen_materials_e_and_nu_turn_gauge_readings_into_stress() {
         "{used}"
     );
     assert!(!exists(&mut p, "#elastic-mismatch"));
-    assert!(p.text("location.hash").contains("ec=mat"));
+    assert!(p.link().contains("ec=mat"));
     // Typed constants far from the material's: used, and a warning beside the results.
     p.choose("elastic-from", "typed");
     p.wait_for_id("in-e");
@@ -508,6 +508,6 @@ fn a_tube_in_plane_strain_takes_nu_from_the_material() {
             t.sx()
         );
     }
-    assert!(p.text("location.hash").contains("ends=pstrain"));
+    assert!(p.link().contains("ends=pstrain"));
     p.no_console_errors();
 }

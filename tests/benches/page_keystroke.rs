@@ -1,10 +1,11 @@
 //! Keystroke to the last DOM change in the built page, in headless Chromium: σx on the typed
-//! path, the torque on the tube path (the perimeter and wall scan), and a gauge reading on the
-//! rosette path. Each keystroke sets the field and fires its `input` event at t0; a
-//! `MutationObserver` notes the time of every DOM change; the figure is the last change minus
-//! t0, once the page has been quiet for 150 ms. Prints the median and 90th percentile per path
-//! for the folder in `STRESSCASE_DIST` (default `dist/`) and, when `STRESSCASE_DIST_BASE` names
-//! another build, for that one too, side by side in the same run. Figures, not a timed test.
+//! path, the torque on the tube path (the perimeter and wall scan), a gauge reading on the
+//! rosette path, and σx again with a 100 000-row table loaded. Each keystroke sets the field
+//! and fires its `input` event at t0; a `MutationObserver` notes the time of every DOM change;
+//! the figure is the last change minus t0, once the page has been quiet for 150 ms. Prints the
+//! median and 90th percentile per path for the folder in `STRESSCASE_DIST` (default `dist/`)
+//! and, when `STRESSCASE_DIST_BASE` names another build, for that one too, side by side in the
+//! same run. Figures, not a timed test.
 //!
 //! Run: `cargo bench -p stresscase-tests --bench page_keystroke` after `cargo xtask build`.
 //! `STRESSCASE_KEYS` changes the keystrokes per path (default 60).
@@ -74,7 +75,41 @@ fn measure(dist: &Path, keys: usize) -> Vec<(&'static str, f64, f64)> {
     p.wait_for_id("in-ge1");
     let (m, q) = path(&mut p, "in-ge1", ["640", "650"], keys);
     out.push(("rosette gauge 1", m, q));
+    // Back to typed components, with a 100 000-row table loaded (its rows do not depend on the
+    // typed components, so typing must not recompute them).
+    p.b.click("src-typed").expect("typed path");
+    p.wait_for_id("in-sx");
+    p.b.choose_file("table-file", &table_file())
+        .expect("choose the table");
+    p.b.wait_for(
+        "document.getElementById('table-status')?.dataset.done === 'true'",
+        std::time::Duration::from_secs(60),
+    )
+    .expect("table computed");
+    let (m, q) = path(&mut p, "in-sx", ["84", "85"], keys);
+    out.push(("σx, 100k-row table", m, q));
     out
+}
+
+/// 100 000 rows of a node id and six stress components, MPa (random, seeded), written once.
+fn table_file() -> PathBuf {
+    use rand::{Rng, SeedableRng};
+    use std::fmt::Write as _;
+    let path = stresscase_tests::check::target_dir().join("bench/keystroke-table-100000.csv");
+    if !path.is_file() {
+        let mut rng = rand_chacha::ChaCha8Rng::seed_from_u64(100);
+        let mut s = String::from("node,sx,sy,sz,txy,tyz,tzx\n");
+        for i in 0..100_000 {
+            let _ = write!(s, "{}", i + 1);
+            for _ in 0..6 {
+                let _ = write!(s, ",{:.2}", rng.random_range(-120.0..120.0));
+            }
+            s.push('\n');
+        }
+        std::fs::create_dir_all(path.parent().expect("a folder")).expect("bench folder");
+        std::fs::write(&path, s).expect("write the table");
+    }
+    path
 }
 
 fn main() {

@@ -115,6 +115,19 @@ impl Page {
             .unwrap_or_else(|| panic!("no numeric value for {key}: {v}"))
     }
 
+    /// The case link in the address bar (`location.hash`), once the page has written the case on
+    /// screen there: it waits for typing to pause, so this waits until the address bar holds
+    /// the link the calc sheet prints.
+    pub fn link(&mut self) -> String {
+        let settled =
+            "(() => { const s = document.getElementById('sheet-link')?.textContent ?? ''; \
+                       return location.hash.length > 1 && s.endsWith(location.hash); })()";
+        if let Err(e) = self.b.wait_for(settled, WAIT) {
+            panic!("the address bar never held the case on screen: {e}");
+        }
+        self.text("location.hash")
+    }
+
     /// A string evaluated in the page.
     pub fn text(&mut self, js: &str) -> String {
         self.b

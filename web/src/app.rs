@@ -43,6 +43,13 @@ fn starting_case() -> (Case, Option<String>, Option<String>) {
     };
     let fallback = || stored.clone().unwrap_or_else(Case::demo);
     let hash = browser::hash();
+    // The page was reloaded (or left and come back to) before the address bar caught up with
+    // the last edit: that edit, made from this very fragment, is the case on screen.
+    let unwritten =
+        browser::session_take(browser::UNWRITTEN_KEY).and_then(|kept| unwritten_edit(&kept, &hash));
+    if let Some(case) = unwritten {
+        return (case, None, storage_problem);
+    }
     if hash.is_empty() {
         return (fallback(), None, storage_problem);
     }
@@ -51,6 +58,19 @@ fn starting_case() -> (Case, Option<String>, Option<String>) {
         Err(e) => (fallback(), Some(e.to_string()), storage_problem),
     }
 }
+
+/// The case of an edit kept by the page before it was left (`kept`: fragment, newline, link),
+/// when the page has come back to the fragment that edit was made from.
+fn unwritten_edit(kept: &str, hash: &str) -> Option<Case> {
+    let (from, link) = kept.split_once('\n')?;
+    if from != hash {
+        return None;
+    }
+    Case::from_link(link).ok()
+}
+
+/// How long typing must pause before the case goes to the URL and to local storage.
+const LINK_PAUSE: std::time::Duration = std::time::Duration::from_millis(250);
 
 /// The root component.
 #[component]
@@ -69,14 +89,17 @@ pub fn App() -> impl IntoView {
     let form = RwSignal::new(start.to_form());
 
     // Talk to the outside: every valid case goes to the URL (a new history entry when an edit
-    // starts after a pause) and to local storage.
-    Effect::new(move |_| {
-        let Ok(case) = form.with(Case::from_form) else {
+    // starts after a pause) and to local storage. Writing them costs the browser milliseconds,
+    // so it waits until typing pauses, and is done at once when the page is hidden or left.
+    let pending = StoredValue::new(None::<TimeoutHandle>);
+    let write_out = move |edited_at: f64| {
+        pending.set_value(None);
+        let Ok(case) = form.with_untracked(Case::from_form) else {
             return;
         };
         let link = case.to_link();
         let mut action = HistoryAction::Nothing;
-        policy.update_value(|p| action = p.on_edit(browser::now_ms(), &link));
+        policy.update_value(|p| action = p.on_edit(edited_at, &link));
         match action {
             HistoryAction::Nothing => return,
             HistoryAction::Push => browser::set_hash(&link, true),
@@ -85,7 +108,32 @@ pub fn App() -> impl IntoView {
         if let Err(e) = browser::store(CURRENT_KEY, &link) {
             storage_problem.set(Some(e));
         }
+    };
+    Effect::new(move |_| {
+        form.track();
+        let edited_at = browser::now_ms();
+        if let Some(h) = pending.get_value() {
+            h.clear();
+        }
+        pending.set_value(set_timeout_with_handle(move || write_out(edited_at), LINK_PAUSE).ok());
     });
+    // Leaving the page: a reload keeps the address it had, so an edit still waiting is also
+    // kept for this tab, with the fragment it was made from (see `starting_case`).
+    let flush = move |leaving: bool| {
+        if let Some(h) = pending.get_value() {
+            h.clear();
+            let from = browser::hash();
+            write_out(browser::now_ms());
+            if let (true, Ok(case)) = (leaving, form.with_untracked(Case::from_form)) {
+                let link = case.to_link();
+                if link != from {
+                    browser::session_put(browser::UNWRITTEN_KEY, &format!("{from}\n{link}"));
+                }
+            }
+        }
+    };
+    let _ = window_event_listener(leptos::ev::pagehide, move |_| flush(true));
+    let _ = window_event_listener(leptos::ev::visibilitychange, move |_| flush(false));
 
     // Back, forward, or a link pasted into the address bar.
     let navigated = move || {
@@ -205,5 +253,25 @@ pub fn App() -> impl IntoView {
             </dl>
         </footer>
         <SheetTail form=form shown=shown/>
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn an_unwritten_edit_comes_back_only_to_the_fragment_it_was_made_from() {
+        let from = Case::demo().to_link();
+        let mut edited = Case::demo();
+        edited.stress[0] = 140.0;
+        let kept = format!("{from}\n{}", edited.to_link());
+        assert_eq!(unwritten_edit(&kept, &from), Some(edited));
+        // Another link pasted, or a new tab: the address wins.
+        assert_eq!(unwritten_edit(&kept, "v=1&mode=plane"), None);
+        assert_eq!(unwritten_edit(&kept, ""), None);
+        // A damaged record is ignored.
+        assert_eq!(unwritten_edit(&from, &from), None);
+        assert_eq!(unwritten_edit(&format!("{from}\nv=9"), &from), None);
     }
 }

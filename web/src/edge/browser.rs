@@ -53,6 +53,27 @@ pub fn store(key: &str, value: &str) -> Result<(), String> {
     })
 }
 
+/// Session-storage key of an edit the address bar had not caught up with when the page was
+/// left: the fragment it was made from, a newline, and its link.
+pub const UNWRITTEN_KEY: &str = "stresscase.unwritten.v1";
+
+/// Keeps `value` for this tab only (session storage: it survives a reload, not a new tab);
+/// silently nothing where session storage is unavailable.
+pub fn session_put(key: &str, value: &str) {
+    if let Some(s) = web_sys::window().and_then(|w| w.session_storage().ok().flatten()) {
+        let _ = s.set_item(key, value);
+    }
+}
+
+/// Takes (reads and removes) a value kept with [`session_put`].
+#[must_use]
+pub fn session_take(key: &str) -> Option<String> {
+    let s = web_sys::window().and_then(|w| w.session_storage().ok().flatten())?;
+    let v = s.get_item(key).ok().flatten();
+    let _ = s.remove_item(key);
+    v
+}
+
 /// The URL fragment without `#` (empty when none).
 #[must_use]
 pub fn hash() -> String {

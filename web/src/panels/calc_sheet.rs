@@ -322,6 +322,9 @@ pub const SOURCES: [&str; 9] = [
     "Unit factors: NIST SP 811.",
 ];
 
+/// How long typing must pause before the printed QR code is made again.
+const QR_PAUSE: std::time::Duration = std::time::Duration::from_millis(400);
+
 /// Most bytes a QR code holds (version 40, level L, byte mode).
 pub const QR_CAPACITY: usize = 2953;
 
@@ -425,8 +428,27 @@ pub fn SheetTail(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
             })
         })
     };
+    // Making a QR code takes milliseconds (it tries eight masks), and the code is only ever
+    // printed: it follows the link once typing pauses, and at once before printing, so the
+    // printed code is always the printed link's.
+    let qr_link = RwSignal::new(link.get_untracked());
+    let pending = StoredValue::new(None::<TimeoutHandle>);
+    let catch_up = move || {
+        let now = link.get_untracked();
+        if qr_link.with_untracked(|q| *q != now) {
+            qr_link.set(now);
+        }
+    };
+    Effect::new(move |_| {
+        link.track();
+        if let Some(h) = pending.get_value() {
+            h.clear();
+        }
+        pending.set_value(set_timeout_with_handle(catch_up, QR_PAUSE).ok());
+    });
+    let _ = window_event_listener_untyped("beforeprint", move |_| catch_up());
     let qr = move || {
-        link.with(|l| {
+        qr_link.with(|l| {
             l.as_ref().map(|l| match qr_path(l) {
                 Some((d, side)) => view! {
                     <svg class="qr" id="sheet-qr" viewBox=format!("0 0 {side} {side}") role="img" aria-label="QR code of the case link" data-modules=side - 8>

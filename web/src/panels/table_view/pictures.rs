@@ -67,11 +67,25 @@ fn allowable_text(a: f64, by: Measure, unit: &str) -> String {
 /// use; `None` while the case has a problem.
 type Limit = (Option<(f64, &'static str)>, Criterion);
 
-fn limit_of(shown: Memo<Option<Evaluation>>, by: Measure) -> Option<Limit> {
-    shown.with(|e| {
-        e.as_ref()
-            .map(|e| (allowable_of(e, by), e.judgement.in_use))
+/// The case's [`Limit`] for the ranking measure, as a memo: the pictures redraw when it
+/// changes, not at every keystroke that leaves it as it was (typing a component changes the
+/// evaluation, not the allowable).
+fn limit_of(
+    shown: Memo<Option<Evaluation>>,
+    ranking: Signal<Option<Measure>>,
+) -> Memo<Option<Limit>> {
+    Memo::new(move |_| {
+        let by = ranking.get()?;
+        shown.with(|e| {
+            e.as_ref()
+                .map(|e| (allowable_of(e, by), e.judgement.in_use))
+        })
     })
+}
+
+/// The case's stress unit's symbol, as a memo (the whole form changes at every keystroke).
+fn unit_of(form: RwSignal<CaseForm>) -> Memo<&'static str> {
+    Memo::new(move |_| form.with(|f| f.unit.symbol()))
 }
 
 /// The caption's sentence on the allowable line: its formula and value, or why there is none.
@@ -161,13 +175,14 @@ pub fn MeasureTrace(
     ranking: Signal<Option<Measure>>,
 ) -> impl IntoView {
     let narrow = use_context::<NarrowScreen>().map(|n| n.0);
+    let (limit, unit) = (limit_of(shown, ranking), unit_of(form));
     move || {
         let w = drawing_width(narrow);
         let plot_w = w - LEFT - RIGHT;
         let by = ranking.get()?;
         let l = loaded.get()?;
-        let unit = form.with(|f| f.unit.symbol());
-        let limit = limit_of(shown, by)?;
+        let unit = unit.get();
+        let limit = limit.get()?;
         outcome.with(|o| {
             let Some(Ok(o)) = o else { return None };
             let time = l.kinds.iter().position(|k| *k == ColumnKind::Time);
@@ -240,12 +255,13 @@ pub fn MeasureHistogram(
     ranking: Signal<Option<Measure>>,
 ) -> impl IntoView {
     let narrow = use_context::<NarrowScreen>().map(|n| n.0);
+    let (limit, unit) = (limit_of(shown, ranking), unit_of(form));
     move || {
         let w = drawing_width(narrow);
         let plot_w = w - LEFT - RIGHT;
         let by = ranking.get()?;
-        let unit = form.with(|f| f.unit.symbol());
-        let limit = limit_of(shown, by)?;
+        let unit = unit.get();
+        let limit = limit.get()?;
         outcome.with(|o| {
             let Some(Ok(o)) = o else { return None };
             let values = o.measures.iter().map(|m| by.of(m));

@@ -139,10 +139,13 @@ pub fn WorstRows(
     ranking: Signal<Option<Measure>>,
     unit: RwSignal<StressUnit>,
 ) -> impl IntoView {
+    // Only the case's unit: the whole form changes at every keystroke, and the list must not
+    // be worked out again for that.
+    let case_unit = Memo::new(move |_| form.with(|f| f.unit));
     move || {
         let by = ranking.get()?;
         let l = loaded.get()?;
-        let u = form.with(|f| f.unit);
+        let u = case_unit.get();
         outcome.with(|o| {
             let Some(Ok(o)) = o else { return None };
             let order = worst_few(&o.measures, by, TOP);
