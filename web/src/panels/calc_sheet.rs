@@ -429,9 +429,9 @@ pub fn SheetTail(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
         })
     };
     // Making a QR code takes milliseconds (it tries eight masks), and the code is only ever
-    // printed: it follows the link once typing pauses, and at once before printing, so the
-    // printed code is always the printed link's.
-    let qr_link = RwSignal::new(link.get_untracked());
+    // printed: it follows the link once typing pauses (and not while the page first draws),
+    // and at once before printing, so the printed code is always the printed link's.
+    let qr_link = RwSignal::new(None);
     let pending = StoredValue::new(None::<TimeoutHandle>);
     let catch_up = move || {
         let now = link.get_untracked();
