@@ -4,7 +4,8 @@
 //! several fresh browser profiles. A script injected before the page's own notes
 //! `performance.now()` (which counts from the navigation) when the first circle appears.
 //! Prints the folder in `STRESSCASE_DIST` (default `dist/`) and, when `STRESSCASE_DIST_BASE`
-//! names another build, that one beside it in the same run. Figures, not a timed test.
+//! names another build, that one beside it in the same run, the starts alternating between
+//! the two. Figures, not a timed test.
 //!
 //! Run: `cargo bench -p stresscase-tests --bench page_start` after `cargo xtask build`.
 //! `STRESSCASE_STARTS` changes the starts per way of opening (default 7).
@@ -47,27 +48,49 @@ struct Figures {
     http_ms: f64,
 }
 
-fn measure(dist: &Path, starts: usize) -> Figures {
-    let page = std::fs::read(dist.join("index.html")).expect("the built page");
-    let mut gz = flate2::write::GzEncoder::new(Vec::new(), flate2::Compression::best());
-    gz.write_all(&page).expect("gzip");
-    let gzip = gz.finish().expect("gzip");
-    let file_url = format!(
-        "file://{}",
-        dist.join("index.html")
-            .canonicalize()
-            .expect("page path")
-            .display()
-    );
-    let disk_ms = median((0..starts).map(|_| one_start(&file_url)).collect());
-    let server = StaticServer::start(dist, "/").expect("serve");
-    let http_ms = median((0..starts).map(|_| one_start(&server.url)).collect());
-    Figures {
-        raw_kb: page.len() as f64 / 1024.0,
-        gzip_kb: gzip.len() as f64 / 1024.0,
-        disk_ms,
-        http_ms,
+/// The figures of each folder in `dists`; the starts alternate between the folders (and
+/// between disk and http), so a machine that slows down during the run slows every folder alike.
+fn measure(dists: &[&Path], starts: usize) -> Vec<Figures> {
+    let servers: Vec<StaticServer> = dists
+        .iter()
+        .map(|d| StaticServer::start(d, "/").expect("serve"))
+        .collect();
+    let file_urls: Vec<String> = dists
+        .iter()
+        .map(|d| {
+            format!(
+                "file://{}",
+                d.join("index.html")
+                    .canonicalize()
+                    .expect("page path")
+                    .display()
+            )
+        })
+        .collect();
+    let mut disk = vec![Vec::new(); dists.len()];
+    let mut http = vec![Vec::new(); dists.len()];
+    for _ in 0..starts {
+        for k in 0..dists.len() {
+            disk[k].push(one_start(&file_urls[k]));
+            http[k].push(one_start(&servers[k].url));
+        }
     }
+    dists
+        .iter()
+        .zip(disk.into_iter().zip(http))
+        .map(|(dist, (disk, http))| {
+            let page = std::fs::read(dist.join("index.html")).expect("the built page");
+            let mut gz = flate2::write::GzEncoder::new(Vec::new(), flate2::Compression::best());
+            gz.write_all(&page).expect("gzip");
+            let gzip = gz.finish().expect("gzip");
+            Figures {
+                raw_kb: page.len() as f64 / 1024.0,
+                gzip_kb: gzip.len() as f64 / 1024.0,
+                disk_ms: median(disk),
+                http_ms: median(http),
+            }
+        })
+        .collect()
 }
 
 fn main() {
@@ -77,8 +100,11 @@ fn main() {
         .unwrap_or(7);
     let dist = stresscase_tests::page::dist();
     let base = std::env::var_os("STRESSCASE_DIST_BASE").map(PathBuf::from);
-    let now = measure(&dist, starts);
-    let before = base.as_ref().map(|b| measure(b, starts));
+    let mut dists = vec![dist.as_path()];
+    dists.extend(base.as_deref());
+    let mut figures = measure(&dists, starts).into_iter();
+    let now = figures.next().expect("this build's figures");
+    let before = figures.next();
     println!("packed page and cold start to the first drawn circle ({starts} fresh profiles each, median)");
     let rows = |f: &Figures| {
         [

@@ -185,6 +185,15 @@ pub fn App() -> impl IntoView {
         }
     });
 
+    // The answer, the inputs and the decision are drawn first; what lies below them (the
+    // results table, the table view, the conventions and the printed sheet's end) follows once
+    // that first frame has been painted, or at once if printing starts first.
+    let rest = RwSignal::new(false);
+    request_animation_frame(move || {
+        set_timeout(move || rest.set(true), std::time::Duration::ZERO);
+    });
+    let _ = window_event_listener_untyped("beforeprint", move |_| rest.set(true));
+
     view! {
         <header class="masthead">
             <h1>"Stresscase"</h1>
@@ -224,8 +233,19 @@ pub fn App() -> impl IntoView {
             <FatigueCheck form=form shown=shown stale=stale/>
             <LifeCheck form=form shown=shown stale=stale/>
         </div>
-        <ResultsPanel shown=shown stale=stale/>
-        <TableView form=form shown=shown/>
+        <Show when=move || rest.get()>
+            <ResultsPanel shown=shown stale=stale/>
+            <TableView form=form shown=shown/>
+            <Conventions/>
+            <SheetTail form=form shown=shown/>
+        </Show>
+    }
+}
+
+/// The sign conventions and symbols, at the foot of the page.
+#[component]
+fn Conventions() -> impl IntoView {
+    view! {
         <footer class="conventions" id="conventions">
             <h2>"Conventions"</h2>
             <ul>
@@ -252,7 +272,6 @@ pub fn App() -> impl IntoView {
                 <dt>"E, ν, α"</dt><dd>"Young's modulus, Poisson's ratio, coefficient of thermal expansion"</dd>
             </dl>
         </footer>
-        <SheetTail form=form shown=shown/>
     }
 }
 
