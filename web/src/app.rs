@@ -195,10 +195,7 @@ pub fn App() -> impl IntoView {
     let _ = window_event_listener_untyped("beforeprint", move |_| rest.set(true));
 
     view! {
-        <header class="masthead">
-            <h1>"Stresscase"</h1>
-            <p class="tagline">"Stress state at one critical point — from loads, gauges or strains — with its principal stresses, all three Mohr's circles and the plane that matters."</p>
-        </header>
+        // The masthead is static in index.html, painted before this code has arrived.
         <SheetHead form=form shown=shown/>
         <Headline shown=shown stale=stale on_print=browser::print/>
         <CautionNote/>

@@ -25,6 +25,9 @@ pub struct TrunkFiles {
     pub wasm: String,
     /// The stylesheet.
     pub css: String,
+    /// The page's static masthead (`<header class="masthead">…</header>` in web/index.html),
+    /// put before the script so it is painted while the rest of the page arrives.
+    pub masthead: String,
 }
 
 fn attr_after<'a>(html: &'a str, marker: &str, end: char) -> Option<&'a str> {
@@ -47,6 +50,11 @@ pub fn trunk_files(index: &str) -> Result<TrunkFiles, String> {
         js: find("from '", '\'', "JS glue import")?,
         wasm: find("module_or_path: '", '\'', "wasm path")?,
         css: find("rel=\"stylesheet\" href=\"", '"', "stylesheet")?,
+        masthead: index
+            .find("<header class=\"masthead\">")
+            .and_then(|a| Some(&index[a..a + index[a..].find("</header>")? + "</header>".len()]))
+            .map(str::to_string)
+            .ok_or("trunk's index.html has no <header class=\"masthead\"> (see web/index.html)")?,
     })
 }
 
@@ -95,7 +103,7 @@ pub fn csp(script: &str, style: &str) -> String {
 
 /// The self-contained page.
 #[must_use]
-pub fn page(glue: &str, wasm: &[u8], css: &str, icon_svg: &str) -> String {
+pub fn page(glue: &str, wasm: &[u8], css: &str, icon_svg: &str, masthead: &str) -> String {
     let script = boot_script(glue, wasm);
     let policy = csp(&script, css);
     let icon = format!(
@@ -103,7 +111,7 @@ pub fn page(glue: &str, wasm: &[u8], css: &str, icon_svg: &str) -> String {
         B64.encode(icon_svg.as_bytes())
     );
     format!(
-        "<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<meta http-equiv=\"Content-Security-Policy\" content=\"{policy}\">\n<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n<meta name=\"description\" content=\"Stresscase: the stress state at one critical point. Runs offline in the browser; nothing is sent anywhere.\">\n<meta name=\"theme-color\" content=\"#17324d\">\n<title>Stresscase — stress at a point</title>\n<link rel=\"icon\" href=\"{icon}\">\n<style>{css}</style>\n</head>\n<body>\n<noscript>Stresscase needs JavaScript and WebAssembly enabled; nothing is sent anywhere.</noscript>\n<script type=\"module\">{script}</script>\n</body>\n</html>\n"
+        "<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<meta http-equiv=\"Content-Security-Policy\" content=\"{policy}\">\n<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n<meta name=\"description\" content=\"Stresscase: the stress state at one critical point. Runs offline in the browser; nothing is sent anywhere.\">\n<meta name=\"theme-color\" content=\"#17324d\">\n<title>Stresscase — stress at a point</title>\n<link rel=\"icon\" href=\"{icon}\">\n<style>{css}</style>\n</head>\n<body>\n{masthead}\n<noscript>Stresscase needs JavaScript and WebAssembly enabled; nothing is sent anywhere.</noscript>\n<script type=\"module\">{script}</script>\n</body>\n</html>\n"
     )
 }
 
@@ -178,7 +186,7 @@ pub fn pack(trunk_dir: &Path, icon: &Path, out_dir: &Path, zip_path: &Path) -> R
     let wasm = read(&trunk_dir.join(&files.wasm))?;
     let css = String::from_utf8(read(&trunk_dir.join(&files.css))?).map_err(|e| e.to_string())?;
     let icon_svg = String::from_utf8(read(icon)?).map_err(|e| e.to_string())?;
-    let html = page(&glue, &wasm, &css, &icon_svg);
+    let html = page(&glue, &wasm, &css, &icon_svg, &files.masthead);
     let outputs: [(&str, Vec<u8>); 5] = [
         ("index.html", html.clone().into_bytes()),
         ("sw.js", service_worker(&html).into_bytes()),
@@ -216,7 +224,7 @@ pub fn pack(trunk_dir: &Path, icon: &Path, out_dir: &Path, zip_path: &Path) -> R
 mod tests {
     use super::*;
 
-    const TRUNK_INDEX: &str = "<link rel=\"stylesheet\" href=\"./style-abc.css\" integrity=\"x\"/>\n<script type=\"module\">\nimport init, * as bindings from './app-123.js';\nconst wasm = await init({ module_or_path: './app-123_bg.wasm' });\n</script>";
+    const TRUNK_INDEX: &str = "<header class=\"masthead\"><h1>S</h1></header>\n<link rel=\"stylesheet\" href=\"./style-abc.css\" integrity=\"x\"/>\n<script type=\"module\">\nimport init, * as bindings from './app-123.js';\nconst wasm = await init({ module_or_path: './app-123_bg.wasm' });\n</script>";
 
     #[test]
     fn finds_trunk_outputs() {
@@ -225,7 +233,8 @@ mod tests {
             Ok(TrunkFiles {
                 js: "app-123.js".into(),
                 wasm: "app-123_bg.wasm".into(),
-                css: "style-abc.css".into()
+                css: "style-abc.css".into(),
+                masthead: "<header class=\"masthead\"><h1>S</h1></header>".into(),
             })
         );
         assert!(trunk_files("<html></html>").is_err());
@@ -238,7 +247,9 @@ mod tests {
             b"\0asm",
             "body{}",
             "<svg/>",
+            "<header class=\"masthead\"><h1>S</h1></header>",
         );
+        assert!(html.contains("<body>\n<header class=\"masthead\"><h1>S</h1></header>"));
         for banned in ["src=\"", "href=\"http", "import ", "fetch("] {
             assert!(!html.contains(banned), "page contains {banned:?}");
         }
