@@ -11,13 +11,11 @@
 //! Run: `cargo bench -p stresscase-tests --bench page_kernel_speed`. `STRESSCASE_BENCH_N`
 //! changes the count.
 
-use rand::{Rng, SeedableRng};
 use std::hint::black_box;
 use std::path::Path;
 use std::process::Command;
 use std::time::Duration;
 use stresscase_core::principal::principal_values_into;
-use stresscase_core::StressTensor;
 use stresscase_tests::browser::Chromium;
 use stresscase_tests::check::{best_of, target_dir};
 use stresscase_tests::serve::StaticServer;
@@ -25,27 +23,14 @@ use stresscase_tests::serve::StaticServer;
 const REPS: usize = 9;
 
 fn main() {
-    let n: usize = std::env::var("STRESSCASE_BENCH_N")
-        .ok()
-        .and_then(|s| s.parse().ok())
-        .unwrap_or(1_000_000);
+    let n: usize = stresscase_tests::check::env_count("STRESSCASE_BENCH_N", 1_000_000);
     let dir = target_dir().join("bench/kernel");
     std::fs::create_dir_all(&dir).expect("bench dir");
     build_wasm(&dir);
 
-    // The same tensors as `principal_speed` (same seed and range).
-    let mut rng = rand_chacha::ChaCha8Rng::seed_from_u64(2026);
-    let tensors: Vec<StressTensor> = (0..n)
-        .map(|_| {
-            let c: [f64; 6] = std::array::from_fn(|_| rng.random_range(-100.0..100.0));
-            StressTensor::new(c[0], c[1], c[2], c[3], c[4], c[5]).expect("finite")
-        })
-        .collect();
-    let bytes: Vec<u8> = tensors
-        .iter()
-        .flat_map(|t| t.components())
-        .flat_map(f64::to_le_bytes)
-        .collect();
+    // The same tensors as `principal_speed`.
+    let tensors = stresscase_tests::check::random_tensors(n);
+    let bytes = stresscase_tests::check::tensor_bytes(&tensors);
     std::fs::write(dir.join("tensors.f64"), bytes).expect("write tensors");
     std::fs::write(dir.join("index.html"), PAGE).expect("write page");
 

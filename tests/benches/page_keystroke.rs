@@ -113,12 +113,9 @@ fn table_file() -> PathBuf {
 }
 
 fn main() {
-    let keys: usize = std::env::var("STRESSCASE_KEYS")
-        .ok()
-        .and_then(|s| s.parse().ok())
-        .unwrap_or(60);
+    let keys: usize = stresscase_tests::check::env_count("STRESSCASE_KEYS", 60);
     let dist = stresscase_tests::page::dist();
-    let base = std::env::var_os("STRESSCASE_DIST_BASE").map(PathBuf::from);
+    let base = stresscase_tests::page::base_dist();
     let now = measure(&dist, keys);
     let before = base.as_ref().map(|b| measure(b, keys));
     println!("keystroke to last DOM change, {keys} keystrokes per path (ms)");

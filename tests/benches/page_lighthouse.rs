@@ -10,7 +10,7 @@
 //! `STRESSCASE_LIGHTHOUSE_RUNS` changes the runs per build (default 3).
 
 use serde_json::Value;
-use std::path::{Path, PathBuf};
+use std::path::Path;
 use std::process::Command;
 use stresscase_tests::browser::chromium_path;
 use stresscase_tests::serve::StaticServer;
@@ -68,12 +68,9 @@ fn main() {
         println!("lighthouse: not installed (npm install -g lighthouse); no scores");
         return;
     }
-    let runs: usize = std::env::var("STRESSCASE_LIGHTHOUSE_RUNS")
-        .ok()
-        .and_then(|s| s.parse().ok())
-        .unwrap_or(3);
+    let runs: usize = stresscase_tests::check::env_count("STRESSCASE_LIGHTHOUSE_RUNS", 3);
     let dist = stresscase_tests::page::dist();
-    let base = std::env::var_os("STRESSCASE_DIST_BASE").map(PathBuf::from);
+    let base = stresscase_tests::page::base_dist();
     let now = measure(&dist, runs);
     let before = base.as_ref().map(|b| measure(b, runs));
     println!("Lighthouse, mobile setting, uncompressed static server ({runs} runs each, median)");

@@ -11,7 +11,7 @@
 //! `STRESSCASE_STARTS` changes the starts per way of opening (default 7).
 
 use std::io::Write as _;
-use std::path::{Path, PathBuf};
+use std::path::Path;
 use std::time::Duration;
 use stresscase_tests::browser::Chromium;
 use stresscase_tests::serve::StaticServer;
@@ -94,12 +94,9 @@ fn measure(dists: &[&Path], starts: usize) -> Vec<Figures> {
 }
 
 fn main() {
-    let starts: usize = std::env::var("STRESSCASE_STARTS")
-        .ok()
-        .and_then(|s| s.parse().ok())
-        .unwrap_or(7);
+    let starts: usize = stresscase_tests::check::env_count("STRESSCASE_STARTS", 7);
     let dist = stresscase_tests::page::dist();
-    let base = std::env::var_os("STRESSCASE_DIST_BASE").map(PathBuf::from);
+    let base = stresscase_tests::page::base_dist();
     let mut dists = vec![dist.as_path()];
     dists.extend(base.as_deref());
     let mut figures = measure(&dists, starts).into_iter();

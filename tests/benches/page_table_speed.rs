@@ -16,10 +16,7 @@ use stresscase_tests::page::Page;
 use stresscase_tests::serve::StaticServer;
 
 fn main() {
-    let rows: usize = std::env::var("STRESSCASE_BENCH_ROWS")
-        .ok()
-        .and_then(|s| s.parse().ok())
-        .unwrap_or(1_000_000);
+    let rows: usize = stresscase_tests::check::env_count("STRESSCASE_BENCH_ROWS", 1_000_000);
     let path = target_dir().join(format!("bench/table-{rows}.csv"));
     assert!(
         path.is_file(),

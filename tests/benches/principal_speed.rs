@@ -6,34 +6,20 @@
 //! Run: `cargo xtask bench` (or `cargo bench -p stresscase-tests --bench principal_speed`; needs
 //! python3 with numpy). `STRESSCASE_BENCH_N` changes the count.
 
-use rand::{Rng, SeedableRng};
 use std::hint::black_box;
 use stresscase_core::principal::{principal_values_into, Principal};
 use stresscase_core::StressTensor;
 use stresscase_tests::check::{best_of, target_dir};
 
 fn main() {
-    let n: usize = std::env::var("STRESSCASE_BENCH_N")
-        .ok()
-        .and_then(|s| s.parse().ok())
-        .unwrap_or(1_000_000);
-    let mut rng = rand_chacha::ChaCha8Rng::seed_from_u64(2026);
-    let tensors: Vec<StressTensor> = (0..n)
-        .map(|_| {
-            let c: [f64; 6] = std::array::from_fn(|_| rng.random_range(-100.0..100.0));
-            StressTensor::new(c[0], c[1], c[2], c[3], c[4], c[5]).expect("finite")
-        })
-        .collect();
+    let n: usize = stresscase_tests::check::env_count("STRESSCASE_BENCH_N", 1_000_000);
+    let tensors = stresscase_tests::check::random_tensors(n);
 
     let dir = target_dir().join("bench");
     std::fs::create_dir_all(&dir).expect("bench dir");
     let input = dir.join("tensors.f64");
     let output = dir.join("numpy_eigvalsh.f64");
-    let bytes: Vec<u8> = tensors
-        .iter()
-        .flat_map(|t| t.components())
-        .flat_map(f64::to_le_bytes)
-        .collect();
+    let bytes = stresscase_tests::check::tensor_bytes(&tensors);
     std::fs::write(&input, bytes).expect("write tensors");
 
     let info = stresscase_tests::peers::run("numpy_eigvalsh.py", &[&input, &output]);

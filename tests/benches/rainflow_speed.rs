@@ -13,10 +13,7 @@ use stresscase_core::sn_curve::SnLine;
 use stresscase_tests::check::{best_of, random_walk, target_dir};
 
 fn main() {
-    let n: usize = std::env::var("STRESSCASE_BENCH_N")
-        .ok()
-        .and_then(|s| s.parse().ok())
-        .unwrap_or(1_000_000);
+    let n: usize = stresscase_tests::check::env_count("STRESSCASE_BENCH_N", 1_000_000);
     let history = random_walk(n);
     let dir = target_dir().join("bench");
     std::fs::create_dir_all(&dir).expect("bench dir");

@@ -19,10 +19,7 @@ use stresscase_tests::check::target_dir;
 use stresscase_web::formats::table::{read, sniff};
 
 fn main() {
-    let rows: usize = std::env::var("STRESSCASE_BENCH_ROWS")
-        .ok()
-        .and_then(|s| s.parse().ok())
-        .unwrap_or(1_000_000);
+    let rows: usize = stresscase_tests::check::env_count("STRESSCASE_BENCH_ROWS", 1_000_000);
     let dir = target_dir().join("bench");
     std::fs::create_dir_all(&dir).expect("bench dir");
     let path = dir.join(format!("table-{rows}.csv"));

@@ -36,6 +36,39 @@ pub fn best_of<F: FnMut()>(reps: usize, mut f: F) -> f64 {
         .fold(f64::INFINITY, f64::min)
 }
 
+/// A count a benchmark takes from the environment variable `name`, else `default`.
+#[must_use]
+pub fn env_count(name: &str, default: usize) -> usize {
+    std::env::var(name)
+        .ok()
+        .and_then(|s| s.parse().ok())
+        .unwrap_or(default)
+}
+
+/// The principal-value benchmarks' tensors: `n` random states with every component uniform in
+/// ±100 MPa, the same for the same `n` (seeded).
+#[must_use]
+pub fn random_tensors(n: usize) -> Vec<stresscase_core::StressTensor> {
+    use rand::{Rng, SeedableRng};
+    let mut rng = rand_chacha::ChaCha8Rng::seed_from_u64(2026);
+    (0..n)
+        .map(|_| {
+            let c: [f64; 6] = std::array::from_fn(|_| rng.random_range(-100.0..100.0));
+            stresscase_core::StressTensor::new(c[0], c[1], c[2], c[3], c[4], c[5]).expect("finite")
+        })
+        .collect()
+}
+
+/// The components of `tensors` as little-endian f64 bytes, six a tensor, for a peer to read.
+#[must_use]
+pub fn tensor_bytes(tensors: &[stresscase_core::StressTensor]) -> Vec<u8> {
+    tensors
+        .iter()
+        .flat_map(|t| t.components())
+        .flat_map(f64::to_le_bytes)
+        .collect()
+}
+
 /// A logger's stress trace for the life benchmarks, MPa: a random walk between −100 and 400
 /// with noise of ±60, the same for the same `n` (seeded).
 #[must_use]

@@ -11,6 +11,12 @@ use std::time::Duration;
 /// How long a page may take to show a result.
 pub const WAIT: Duration = Duration::from_secs(20);
 
+/// Another build to measure beside this one: `$STRESSCASE_DIST_BASE`, if set.
+#[must_use]
+pub fn base_dist() -> Option<PathBuf> {
+    std::env::var_os("STRESSCASE_DIST_BASE").map(PathBuf::from)
+}
+
 /// The built (packed) folder: `$STRESSCASE_DIST`, else `dist/`.
 #[must_use]
 pub fn dist() -> PathBuf {
