@@ -24,7 +24,7 @@ use column_kinds::ColumnKinds;
 use history_pick::HistoryPick;
 use leptos::prelude::*;
 use leptos::task::spawn_local;
-use pictures::{MeasureHistogram, MeasureTrace};
+use pictures::{limit_of, MeasureHistogram, MeasureTrace};
 use reading::{load, load_file, Loaded};
 use std::sync::Arc;
 use stresscase_core::points::{worst_few, Measure};
@@ -202,6 +202,11 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
             _ => None,
         })
     });
+    // What the list and pictures take from the case, as memos: the whole form and evaluation
+    // change at every keystroke, the case's unit and the allowable seldom, and the rows must
+    // not be ranked and drawn again for nothing.
+    let case_unit = Memo::new(move |_| form.with(|f| f.unit));
+    let limit = limit_of(shown, ranking);
 
     let status = move || {
         if let Some(b) = busy.get() {
@@ -386,10 +391,10 @@ pub fn TableView(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
                 </label>
             </div>
             {refusals}
-            <WorstRows form=form shown=shown loaded=loaded outcome=outcome ranking=ranking unit=unit/>
+            <WorstRows form=form shown=shown loaded=loaded outcome=outcome ranking=ranking unit=unit case_unit=case_unit/>
             <div class="table-pictures">
-                <MeasureTrace form=form shown=shown loaded=loaded outcome=outcome ranking=ranking/>
-                <MeasureHistogram form=form shown=shown outcome=outcome ranking=ranking/>
+                <MeasureTrace case_unit=case_unit limit=limit loaded=loaded outcome=outcome ranking=ranking/>
+                <MeasureHistogram case_unit=case_unit limit=limit outcome=outcome ranking=ranking/>
             </div>
             <HistoryPick form=form loaded=loaded outcome=outcome unit=unit/>
             <div class="buttons export-row" hidden=move || ranking.get().is_none()>

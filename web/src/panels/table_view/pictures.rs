@@ -6,7 +6,6 @@
 use super::reading::Loaded;
 use super::worst_rows::{is_stress, measure_symbol};
 use super::Outcome;
-use crate::model::case::CaseForm;
 use crate::model::evaluation::Evaluation;
 use crate::model::numfmt::format_sig;
 use crate::model::table::picture::{histogram, trace};
@@ -17,6 +16,7 @@ use core::fmt::Write as _;
 use leptos::prelude::*;
 use stresscase_core::criteria::Criterion;
 use stresscase_core::points::{allowable, Measure};
+use stresscase_core::StressUnit;
 
 /// Drawing widths: on a wide screen two pictures side by side, on a phone one narrow picture,
 /// so the text stays about 11 px where it is shown.
@@ -65,12 +65,12 @@ fn allowable_text(a: f64, by: Measure, unit: &str) -> String {
 
 /// What the case says of `by`: its allowable (and how it is worked out), and the criterion in
 /// use; `None` while the case has a problem.
-type Limit = (Option<(f64, &'static str)>, Criterion);
+pub(super) type Limit = (Option<(f64, &'static str)>, Criterion);
 
 /// The case's [`Limit`] for the ranking measure, as a memo: the pictures redraw when it
 /// changes, not at every keystroke that leaves it as it was (typing a component changes the
 /// evaluation, not the allowable).
-fn limit_of(
+pub(super) fn limit_of(
     shown: Memo<Option<Evaluation>>,
     ranking: Signal<Option<Measure>>,
 ) -> Memo<Option<Limit>> {
@@ -81,11 +81,6 @@ fn limit_of(
                 .map(|e| (allowable_of(e, by), e.judgement.in_use))
         })
     })
-}
-
-/// The case's stress unit's symbol, as a memo (the whole form changes at every keystroke).
-fn unit_of(form: RwSignal<CaseForm>) -> Memo<&'static str> {
-    Memo::new(move |_| form.with(|f| f.unit.symbol()))
 }
 
 /// The caption's sentence on the allowable line: its formula and value, or why there is none.
@@ -168,20 +163,19 @@ fn y_name(by: Measure, unit: &str) -> String {
 /// The measure against the line in the file, or time (`table-trace`).
 #[component]
 pub fn MeasureTrace(
-    form: RwSignal<CaseForm>,
-    shown: Memo<Option<Evaluation>>,
+    case_unit: Memo<StressUnit>,
+    limit: Memo<Option<Limit>>,
     loaded: RwSignal<Option<Loaded>>,
     outcome: RwSignal<Outcome>,
     ranking: Signal<Option<Measure>>,
 ) -> impl IntoView {
     let narrow = use_context::<NarrowScreen>().map(|n| n.0);
-    let (limit, unit) = (limit_of(shown, ranking), unit_of(form));
     move || {
         let w = drawing_width(narrow);
         let plot_w = w - LEFT - RIGHT;
         let by = ranking.get()?;
         let l = loaded.get()?;
-        let unit = unit.get();
+        let unit = case_unit.get().symbol();
         let limit = limit.get()?;
         outcome.with(|o| {
             let Some(Ok(o)) = o else { return None };
@@ -249,18 +243,17 @@ pub fn MeasureTrace(
 /// How many rows have each value of the measure (`table-histogram`).
 #[component]
 pub fn MeasureHistogram(
-    form: RwSignal<CaseForm>,
-    shown: Memo<Option<Evaluation>>,
+    case_unit: Memo<StressUnit>,
+    limit: Memo<Option<Limit>>,
     outcome: RwSignal<Outcome>,
     ranking: Signal<Option<Measure>>,
 ) -> impl IntoView {
     let narrow = use_context::<NarrowScreen>().map(|n| n.0);
-    let (limit, unit) = (limit_of(shown, ranking), unit_of(form));
     move || {
         let w = drawing_width(narrow);
         let plot_w = w - LEFT - RIGHT;
         let by = ranking.get()?;
-        let unit = unit.get();
+        let unit = case_unit.get().symbol();
         let limit = limit.get()?;
         outcome.with(|o| {
             let Some(Ok(o)) = o else { return None };

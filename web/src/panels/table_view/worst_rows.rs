@@ -138,10 +138,8 @@ pub fn WorstRows(
     outcome: RwSignal<Outcome>,
     ranking: Signal<Option<Measure>>,
     unit: RwSignal<StressUnit>,
+    case_unit: Memo<StressUnit>,
 ) -> impl IntoView {
-    // Only the case's unit: the whole form changes at every keystroke, and the list must not
-    // be worked out again for that.
-    let case_unit = Memo::new(move |_| form.with(|f| f.unit));
     move || {
         let by = ranking.get()?;
         let l = loaded.get()?;
