@@ -34,6 +34,13 @@ pub fn signed_von_mises(sigma1: f64, sigma3: f64, von_mises: f64) -> f64 {
     }
 }
 
+/// von Mises equivalent stress σvm = √(3 J2) alone, without the principal stresses (see module
+/// docs; J2 by its difference form, which never overflows for a finite tensor).
+#[must_use]
+pub fn von_mises(t: &StressTensor) -> f64 {
+    fmath::sqrt(3.0) * sqrt_j2(t)
+}
+
 /// Below this fraction of ‖σ‖ the deviator counts as zero (see module docs).
 pub const DEVIATOR_FLOOR: f64 = 1e-12;
 
@@ -60,7 +67,7 @@ impl Equivalent {
     #[must_use]
     pub fn of(t: &StressTensor) -> Self {
         let [s1, _, s3] = principal_values(t);
-        let von_mises = fmath::sqrt(3.0) * sqrt_j2(t);
+        let von_mises = von_mises(t);
         let mean = mean_stress(t);
         let defined = von_mises > DEVIATOR_FLOOR * t.frobenius_norm();
         let lode_angle = defined.then(|| {

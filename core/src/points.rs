@@ -10,10 +10,9 @@
 //! typed in agree to the last bit (tested).
 
 use crate::criteria::{failure_index, Criterion};
-use crate::equivalent::DEVIATOR_FLOOR;
+use crate::equivalent::{von_mises, DEVIATOR_FLOOR};
 use crate::error::StressError;
-use crate::fmath;
-use crate::invariants::{mean_stress, sqrt_j2};
+use crate::invariants::mean_stress;
 use crate::material::Strengths;
 use crate::principal::principal_values_into;
 use crate::tensor::StressTensor;
@@ -198,7 +197,7 @@ fn measure_one(
     criterion: Criterion,
     strengths: &Strengths,
 ) -> PointMeasures {
-    let von_mises = fmath::sqrt(3.0) * sqrt_j2(t);
+    let von_mises = von_mises(t);
     let tresca = (p[0] - p[2]).max(0.0);
     let defined = von_mises > DEVIATOR_FLOOR * t.frobenius_norm();
     let factor = match failure_index(criterion, p, strengths) {

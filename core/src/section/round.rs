@@ -23,8 +23,13 @@ impl Round {
     /// from the outside in.
     pub(super) fn scan_radii(&self) -> Vec<f64> {
         if self.ri > 0.0 {
+            // The surfaces exactly, so the scan's curves along them are samples of its grid.
             (0..9)
-                .map(|i| self.ro - (self.ro - self.ri) * f64::from(i) / 8.0)
+                .map(|i| match i {
+                    0 => self.ro,
+                    8 => self.ri,
+                    _ => self.ro - (self.ro - self.ri) * f64::from(i) / 8.0,
+                })
                 .collect()
         } else {
             alloc::vec![self.ro]

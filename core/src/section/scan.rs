@@ -4,7 +4,7 @@
 //! the page finds where its decision is hardest.
 
 use super::{Concentration, Loads, Location, Pressure, Rectangle, Round, Section, SectionError};
-use crate::equivalent::Equivalent;
+use crate::equivalent::von_mises;
 use crate::fmath;
 use crate::principal::principal_values;
 use crate::tensor::StressTensor;
@@ -100,15 +100,61 @@ where
     Ok((x, f(x)?))
 }
 
-/// von Mises and σ1 of a tensor.
+/// von Mises and σ1 of a tensor (σvm from J2 alone, one eigenvalue solve for σ1).
 fn measures(s: &StressTensor) -> (f64, f64) {
-    (Equivalent::of(s).von_mises, principal_values(s)[0])
+    (von_mises(s), principal_values(s)[0])
+}
+
+/// The ranks of a scan's two maxima: highest von Mises, highest σ1 (no tie-breaker: the first
+/// sample in scan order wins a tie).
+fn by_von_mises(t: &StressTensor) -> Rank {
+    Rank {
+        severity: von_mises(t),
+        tie: 0.0,
+    }
+}
+
+fn by_sigma1(t: &StressTensor) -> Rank {
+    Rank {
+        severity: principal_values(t)[0],
+        tie: 0.0,
+    }
+}
+
+/// The most severe of a scan's coarse samples so far: its rank and where it is.
+struct Best<P>(Option<(Rank, P)>);
+
+impl<P: Copy> Best<P> {
+    const fn new() -> Self {
+        Self(None)
+    }
+
+    /// Keeps `here` when it beats the best so far (so of equals the first one stays).
+    fn offer(&mut self, here: Rank, at: P) {
+        if self.0.as_ref().is_none_or(|(b, _)| here.beats(b)) {
+            self.0 = Some((here, at));
+        }
+    }
+
+    fn or(self, fallback: P) -> (Rank, P) {
+        self.0.unwrap_or((Rank::LEAST, fallback))
+    }
+}
+
+/// The coarse samples of a round section, in scan order: `n` angles from φ = 0 at each radius
+/// of its scan (the outer surface first, then through the wall of a tube).
+fn round_grid(s: &Round, n: usize) -> impl Iterator<Item = (f64, f64)> {
+    let step = 2.0 * PI / n as f64;
+    s.scan_radii()
+        .into_iter()
+        .flat_map(move |r| (0..n).map(move |j| (step * j as f64, r)))
 }
 
 impl Section {
     /// Samples the perimeter (`samples` points on each path, at least 8) and refines the highest
     /// von Mises and principal stress between samples by golden-section search; a tube is also
-    /// scanned through its wall at nine radii and refined in r.
+    /// scanned through its wall at nine radii and refined in r. Both maxima start from the same
+    /// samples.
     ///
     /// # Errors
     /// As [`stress_at`](Self::stress_at).
@@ -146,42 +192,46 @@ impl Section {
     ) -> Result<Critical, SectionError> {
         let n = samples.max(8);
         match self {
-            Self::Round(s) => self.search_round(s, loads, pressure, k, n, rank),
-            Self::Rectangle(s) => self.search_rectangle(s, loads, pressure, k, n, rank),
+            Self::Round(s) => {
+                let mut best = Best::new();
+                for (phi, r) in round_grid(s, n) {
+                    let t = self.stress_at(loads, pressure, k, Location::Round { phi, r })?;
+                    best.offer(rank(&t), (phi, r));
+                }
+                self.refine_round(s, (loads, pressure, k), n, rank, best.or((0.0, s.ro)))
+            }
+            Self::Rectangle(s) => {
+                let mut best = Best::new();
+                for pos in s.scan_positions(n) {
+                    let t = self.stress_at(loads, pressure, k, s.location_at(pos))?;
+                    best.offer(rank(&t), pos);
+                }
+                self.refine_rectangle(s, (loads, pressure, k), n, rank, best.or(0.0))
+            }
         }
     }
 
-    fn search_round(
+    /// Refines the best coarse sample `(first, (φ, r))` of a round section: three rounds of
+    /// golden-section search in φ within a sample step, then (in a tube) in r within an eighth
+    /// of the wall, with both surfaces as candidates.
+    fn refine_round(
         &self,
         s: &Round,
-        loads: &Loads,
-        p: &Pressure,
-        k: Concentration,
+        (loads, p, k): (&Loads, &Pressure, Concentration),
         n: usize,
         rank: &dyn Fn(&StressTensor) -> Rank,
+        (first, (mut phi, mut r)): (Rank, (f64, f64)),
     ) -> Result<Critical, SectionError> {
         let at = |phi: f64, r: f64| self.stress_at(loads, p, k, Location::Round { phi, r });
         let severity = |phi: f64, r: f64| Ok(rank(&at(phi, r)?).severity_or_least());
         let step = 2.0 * PI / n as f64;
-        let radii = s.scan_radii();
-        let mut best: Option<(Rank, f64, f64)> = None;
-        for &r in &radii {
-            for j in 0..n {
-                let phi = step * j as f64;
-                let here = rank(&at(phi, r)?);
-                if best.is_none_or(|(b, _, _)| here.beats(&b)) {
-                    best = Some((here, phi, r));
-                }
-            }
-        }
-        let (first, mut phi, mut r) = best.unwrap_or((Rank::LEAST, 0.0, s.ro));
         let mut value = first.severity_or_least();
         for _ in 0..3 {
             let (x, v) = golden_max(phi - step, phi + step, |f| severity(f, r))?;
             if v > value {
                 (phi, value) = (x, v);
             }
-            if radii.len() > 1 {
+            if s.ri > 0.0 {
                 let h = (s.ro - s.ri) / 8.0;
                 let (lo, hi) = ((r - h).max(s.ri), (r + h).min(s.ro));
                 let (x, v) = golden_max(lo, hi, |rr| severity(phi, rr))?;
@@ -205,28 +255,21 @@ impl Section {
         })
     }
 
-    fn search_rectangle(
+    /// Refines the best coarse sample `(first, s)` of a rectangle by golden-section search
+    /// within a sample step along the perimeter.
+    fn refine_rectangle(
         &self,
         s: &Rectangle,
-        loads: &Loads,
-        p: &Pressure,
-        k: Concentration,
+        (loads, p, k): (&Loads, &Pressure, Concentration),
         n: usize,
         rank: &dyn Fn(&StressTensor) -> Rank,
+        (first, start): (Rank, f64),
     ) -> Result<Critical, SectionError> {
         let len = s.perimeter();
-        let at = |pos: f64| self.stress_at(loads, p, k, s.location_at(pos));
-        let mut best: Option<(Rank, f64)> = None;
-        for pos in s.scan_positions(n) {
-            let here = rank(&at(pos)?);
-            if best.is_none_or(|(b, _)| here.beats(&b)) {
-                best = Some((here, pos));
-            }
-        }
-        let (first, start) = best.unwrap_or((Rank::LEAST, 0.0));
         let step = len / n as f64;
         let (x, v) = golden_max(start - step, start + step, |pos| {
-            Ok(rank(&at(pos)?).severity_or_least())
+            let t = self.stress_at(loads, p, k, s.location_at(pos))?;
+            Ok(rank(&t).severity_or_least())
         })?;
         let (pos, value) = if v > first.severity_or_least() {
             (fmath::wrap(x, len), v)
@@ -248,34 +291,54 @@ impl Section {
         k: Concentration,
         n: usize,
     ) -> Result<Scan, SectionError> {
-        let step = 2.0 * PI / n as f64;
-        let sample = |phi: f64, r: f64| -> Result<Sample, SectionError> {
+        // One pass over the grid: the curves along the surfaces are its rows there, and both
+        // maxima start from its best samples.
+        let mut outer = Vec::with_capacity(n);
+        let mut bore = Vec::new();
+        let (mut best_vm, mut best_s1) = (Best::new(), Best::new());
+        for (phi, r) in round_grid(s, n) {
             let (von_mises, sigma1) =
                 measures(&self.stress_at(loads, p, k, Location::Round { phi, r })?);
-            Ok(Sample {
+            let sample = Sample {
                 position: phi,
                 von_mises,
                 sigma1,
-            })
-        };
-        let path = |r: f64| -> Result<Vec<Sample>, SectionError> {
-            (0..n).map(|j| sample(step * j as f64, r)).collect()
-        };
+            };
+            if r == s.ro {
+                outer.push(sample);
+            } else if r == s.ri {
+                bore.push(sample);
+            }
+            best_vm.offer(
+                Rank {
+                    severity: von_mises,
+                    tie: 0.0,
+                },
+                (phi, r),
+            );
+            best_s1.offer(
+                Rank {
+                    severity: sigma1,
+                    tie: 0.0,
+                },
+                (phi, r),
+            );
+        }
         let mut curves = alloc::vec![Curve {
             path: Path::Outer,
-            samples: path(s.ro)?,
+            samples: outer,
         }];
         if s.ri > 0.0 {
             curves.push(Curve {
                 path: Path::Bore,
-                samples: path(s.ri)?,
+                samples: bore,
             });
         }
-        let (vm, s1) = rank_by_measures();
+        let lkp = (loads, p, k);
         Ok(Scan {
             curves,
-            max_von_mises: self.search_round(s, loads, p, k, n, &vm)?,
-            max_principal: self.search_round(s, loads, p, k, n, &s1)?,
+            max_von_mises: self.refine_round(s, lkp, n, &by_von_mises, best_vm.or((0.0, s.ro)))?,
+            max_principal: self.refine_round(s, lkp, n, &by_sigma1, best_s1.or((0.0, s.ro)))?,
         })
     }
 
@@ -289,6 +352,7 @@ impl Section {
     ) -> Result<Scan, SectionError> {
         let len = s.perimeter();
         let mut samples = Vec::new();
+        let (mut best_vm, mut best_s1) = (Best::new(), Best::new());
         for pos in s.scan_positions(n) {
             let (von_mises, sigma1) = measures(&self.stress_at(loads, p, k, s.location_at(pos))?);
             samples.push(Sample {
@@ -296,6 +360,20 @@ impl Section {
                 von_mises,
                 sigma1,
             });
+            best_vm.offer(
+                Rank {
+                    severity: von_mises,
+                    tie: 0.0,
+                },
+                pos,
+            );
+            best_s1.offer(
+                Rank {
+                    severity: sigma1,
+                    tie: 0.0,
+                },
+                pos,
+            );
         }
         // Close the loop for the plot.
         if let Some(first) = samples.first().copied() {
@@ -304,34 +382,16 @@ impl Section {
                 ..first
             });
         }
-        let (vm, s1) = rank_by_measures();
+        let lkp = (loads, p, k);
         Ok(Scan {
-            max_von_mises: self.search_rectangle(s, loads, p, k, n, &vm)?,
-            max_principal: self.search_rectangle(s, loads, p, k, n, &s1)?,
+            max_von_mises: self.refine_rectangle(s, lkp, n, &by_von_mises, best_vm.or(0.0))?,
+            max_principal: self.refine_rectangle(s, lkp, n, &by_sigma1, best_s1.or(0.0))?,
             curves: alloc::vec![Curve {
                 path: Path::Perimeter,
                 samples,
             }],
         })
     }
-}
-
-/// The two rankings of [`Section::scan`]: highest von Mises, highest σ1 (no tie-breaker: the
-/// first sample in scan order wins a tie).
-fn rank_by_measures() -> (
-    impl Fn(&StressTensor) -> Rank,
-    impl Fn(&StressTensor) -> Rank,
-) {
-    (
-        |t: &StressTensor| Rank {
-            severity: measures(t).0,
-            tie: 0.0,
-        },
-        |t: &StressTensor| Rank {
-            severity: measures(t).1,
-            tie: 0.0,
-        },
-    )
 }
 
 /// How severe a point is for a decision (larger is worse, e.g. 1/n for a factor of safety n),
@@ -379,6 +439,7 @@ impl Rank {
 #[cfg(test)]
 mod tests {
     use super::*;
+    use crate::equivalent::Equivalent;
     use crate::section::Face;
     use crate::vessel::Ends;
     use proptest::prelude::*;
@@ -424,6 +485,51 @@ mod tests {
         // The scan's von Mises maximum is the governing point of a von Mises ranking.
         let scan = sec.scan(&l, &Pressure::NONE, k, 72).unwrap();
         assert!((scan.max_von_mises.value - Equivalent::of(&t).von_mises).abs() < 1e-6 * sigma);
+    }
+
+    proptest! {
+        // Each case runs three full searches (slow in a debug build).
+        #![proptest_config(ProptestConfig::with_cases(32))]
+        #[test]
+        fn the_scan_finds_what_separate_searches_find(
+            ri in 0.0..25.0f64, mz in -1e6..1e6f64, my in -1e6..1e6f64, t in -1e6..1e6f64,
+            vy in -1e5..1e5f64, p in 0.0..100.0f64, rect in any::<bool>(), samples in 8usize..40,
+        ) {
+            // One pass over the samples for the curves and both maxima must find exactly what
+            // a search per measure finds, and the curves must be the stresses on the surfaces.
+            let sec = if rect {
+                Section::Rectangle(Rectangle::new(40.0, 25.0).unwrap())
+            } else if ri > 1.0 {
+                Section::Round(Round::tube(60.0, 2.0 * ri).unwrap())
+            } else {
+                Section::Round(Round::solid(60.0).unwrap())
+            };
+            let pr = match sec {
+                Section::Round(r) if r.ri > 0.0 => Pressure { inner: p, outer: 0.0, ends: Ends::Closed, nu: 0.3 },
+                _ => Pressure::NONE,
+            };
+            let (loads, k) = (Loads { mz, my, t, vy, ..Loads::default() }, Concentration::default());
+            let scan = sec.scan(&loads, &pr, k, samples).unwrap();
+            let vm = sec.governing(&loads, &pr, k, samples, &by_von_mises).unwrap();
+            let s1 = sec.governing(&loads, &pr, k, samples, &by_sigma1).unwrap();
+            prop_assert_eq!(scan.max_von_mises, vm);
+            prop_assert_eq!(scan.max_principal, s1);
+            for c in &scan.curves {
+                for x in &c.samples {
+                    let at = match (c.path, sec) {
+                        (Path::Outer, Section::Round(r)) => Location::Round { phi: x.position, r: r.ro },
+                        (Path::Bore, Section::Round(r)) => Location::Round { phi: x.position, r: r.ri },
+                        (_, Section::Rectangle(r)) => r.location_at(x.position),
+                        _ => unreachable!(),
+                    };
+                    let (v, s) = measures(&sec.stress_at(&loads, &pr, k, at).unwrap());
+                    prop_assert_eq!((x.von_mises, x.sigma1), (v, s));
+                    // σvm from J2 alone is the von Mises of every measure.
+                    let e = Equivalent::of(&sec.stress_at(&loads, &pr, k, at).unwrap());
+                    prop_assert_eq!(x.von_mises, e.von_mises);
+                }
+            }
+        }
     }
 
     proptest! {
