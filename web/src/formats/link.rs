@@ -434,4 +434,4 @@ fn all_keys() -> Vec<&'static str> {
 }
 
 #[cfg(test)]
-mod tests;
+pub(crate) mod tests;

@@ -525,7 +525,7 @@ impl CaseForm {
     #[must_use]
     pub fn is_active(&self, field: Field) -> bool {
         match field {
-            Field::Src(n) => self.choices.active().contains(&n),
+            Field::Src(n) => self.choices.uses(n),
             Field::History => self.choices.history_on(),
             f if Field::STRESS.contains(&f) => {
                 self.choices.source == Source::Typed

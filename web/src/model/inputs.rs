@@ -673,12 +673,29 @@ impl Choices {
             .map(|i| i.num)
             .collect()
     }
+
+    /// Whether the current choices use `n` (the same as `active().contains(&n)`, without
+    /// going through every input).
+    #[must_use]
+    pub fn uses(&self, n: Num) -> bool {
+        (n.input().used)(self)
+    }
 }
 
 #[cfg(test)]
 mod tests {
     use super::*;
     use crate::model::choices::MAX_GAUGES;
+
+    proptest::proptest! {
+        #[test]
+        fn a_number_is_used_exactly_when_it_is_active(c in crate::formats::link::tests::arb_choices()) {
+            let active = c.active();
+            for row in INPUTS {
+                proptest::prop_assert_eq!(c.uses(row.num), active.contains(&row.num), "{:?}", row.num);
+            }
+        }
+    }
 
     #[test]
     fn every_number_is_declared_once() {

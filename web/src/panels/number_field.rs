@@ -9,12 +9,32 @@ use leptos::prelude::*;
 /// for refusing its value.
 pub type SharedResult = Memo<Result<Evaluation, Vec<FieldProblem>>>;
 
+/// What one field shows of the form. Read from the form once a keystroke, so the form has one
+/// subscriber per field, and each part of the field is redrawn only when it changes.
+#[derive(Debug, Clone, PartialEq)]
+struct FieldState {
+    label: String,
+    text: String,
+    unit: &'static str,
+    active: bool,
+    problem: Option<String>,
+}
+
 /// A text input bound to one field of the case.
 #[component]
 pub fn NumberField(form: RwSignal<CaseForm>, field: Field) -> impl IntoView {
     let shared = use_context::<SharedResult>();
+    let state = Memo::new(move |_| {
+        form.with(|f| FieldState {
+            label: f.label(field),
+            text: f.text(field).to_string(),
+            unit: f.unit_of(field),
+            active: f.is_active(field),
+            problem: f.problem(field),
+        })
+    });
     let problem = Memo::new(move |_| {
-        form.with(|f| f.problem(field)).or_else(|| {
+        state.with(|s| s.problem.clone()).or_else(|| {
             shared.and_then(|r| {
                 r.with(|r| {
                     r.as_ref().err().and_then(|ps| {
@@ -26,11 +46,11 @@ pub fn NumberField(form: RwSignal<CaseForm>, field: Field) -> impl IntoView {
             })
         })
     });
-    let active = Memo::new(move |_| form.with(|f| f.is_active(field)));
+    let active = Memo::new(move |_| state.with(|s| s.active));
     let msg_id = format!("{}-msg", field.id());
     view! {
         <div class="field" class:invalid=move || problem.with(Option::is_some) class:inactive=move || !active.get()>
-            <label for=field.id()>{move || form.with(|f| f.label(field))}</label>
+            <label for=field.id()>{move || state.with(|s| s.label.clone())}</label>
             <input
                 type="text"
                 inputmode="decimal"
@@ -40,10 +60,10 @@ pub fn NumberField(form: RwSignal<CaseForm>, field: Field) -> impl IntoView {
                 aria-describedby=msg_id.clone()
                 aria-invalid=move || if problem.with(Option::is_some) { "true" } else { "false" }
                 prop:disabled=move || !active.get()
-                prop:value=move || form.with(|f| f.text(field).to_string())
+                prop:value=move || state.with(|s| s.text.clone())
                 on:input:target=move |ev| form.update(|f| f.set_text(field, ev.target().value()))
             />
-            <span class="unit">{move || form.with(|f| f.unit_of(field))}</span>
+            <span class="unit">{move || state.with(|s| s.unit)}</span>
             <span class="field-msg" id=msg_id>{move || problem.get().unwrap_or_default()}</span>
         </div>
     }
@@ -55,11 +75,12 @@ pub fn NumberField(form: RwSignal<CaseForm>, field: Field) -> impl IntoView {
 pub fn SourceFields(form: RwSignal<CaseForm>, place: crate::model::inputs::Place) -> impl IntoView {
     let nums = place.numbers();
     let shown = Memo::new(move |_| {
-        let active = form.with(|f| f.choices.active());
-        nums.iter()
-            .copied()
-            .filter(|n| active.contains(n))
-            .collect::<Vec<_>>()
+        form.with(|f| {
+            nums.iter()
+                .copied()
+                .filter(|&n| f.choices.uses(n))
+                .collect::<Vec<_>>()
+        })
     });
     view! {
         <div class="component-grid">

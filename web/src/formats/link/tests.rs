@@ -135,7 +135,7 @@ fn arb_num() -> impl Strategy<Value = f64> {
     ]
 }
 
-fn arb_choices() -> impl Strategy<Value = Choices> {
+pub(crate) fn arb_choices() -> impl Strategy<Value = Choices> {
     use crate::model::choices::{Condition, Layout, Surface};
     use stresscase_core::section::Face;
     use stresscase_core::vessel::Ends;
