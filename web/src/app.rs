@@ -171,6 +171,7 @@ pub fn App() -> impl IntoView {
         );
     let stale = Memo::new(move |_| result.with(Result::is_err));
     provide_context::<SharedResult>(result);
+    provide_context(crate::panels::shared_case::SharedCase::new(form));
     // The table's load history, shared by the table view (which makes it) and the life panel.
     provide_context(RwSignal::new(
         None::<std::sync::Arc<crate::model::table::history::TableHistory>>,

@@ -17,21 +17,43 @@ pub fn format_sig(v: f64, sig: usize) -> String {
         };
     }
     let sig = sig.clamp(1, 17);
-    // Round first, then decide the notation from the rounded value (so 999.999 → 1000.0).
+    // Round once, to `sig` digits in scientific form, then decide the notation from the
+    // rounded value (so 999.999 → 1000.0) and place its digits (no second rounding).
     let sci = format!("{:.*e}", sig - 1, v);
     let (mantissa, exp) = sci.split_once('e').unwrap_or((sci.as_str(), "0"));
     let exp: i32 = exp.parse().unwrap_or(0);
-    let mantissa: f64 = mantissa.parse().unwrap_or(0.0);
-    if mantissa == 0.0 {
+    let negative = mantissa.starts_with('-');
+    let digits: String = mantissa.chars().filter(char::is_ascii_digit).collect();
+    if digits.bytes().all(|d| d == b'0') {
         return "0".into();
     }
-    let out = if (-3..6).contains(&exp) {
-        let decimals = (sig as i32 - 1 - exp).max(0) as usize;
-        format!("{:.*}", decimals, mantissa * 10f64.powi(exp))
+    let mut out = String::with_capacity(sig + 8);
+    if negative {
+        out.push('−');
+    }
+    if (-3..6).contains(&exp) {
+        // Plain: `sig` significant digits, the decimal point moved by `exp`.
+        if exp < 0 {
+            out.push_str("0.");
+            out.extend(core::iter::repeat_n('0', (-exp - 1) as usize));
+            out.push_str(&digits);
+        } else {
+            let int = exp as usize + 1;
+            if digits.len() > int {
+                out.push_str(&digits[..int]);
+                out.push('.');
+                out.push_str(&digits[int..]);
+            } else {
+                out.push_str(&digits);
+                out.extend(core::iter::repeat_n('0', int - digits.len()));
+            }
+        }
     } else {
-        format!("{:.*} × 10{}", sig - 1, mantissa, superscript(exp))
-    };
-    out.replace('-', "−")
+        out.push_str(&mantissa[usize::from(negative)..]);
+        out.push_str(" × 10");
+        out.push_str(&superscript(exp));
+    }
+    out
 }
 
 /// Writes a number in its shortest form that reads back to the same f64.
@@ -99,6 +121,39 @@ pub fn format_for_entry(v: f64) -> String {
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    /// The former two-step writer (round in scientific form, then write the rounded value
+    /// plainly with the float formatter), kept to check the digit-placing one against.
+    fn format_sig_by_formatter(v: f64, sig: usize) -> String {
+        let sig = sig.clamp(1, 17);
+        let sci = format!("{:.*e}", sig - 1, v);
+        let (mantissa, exp) = sci.split_once('e').unwrap();
+        let exp: i32 = exp.parse().unwrap();
+        let mantissa: f64 = mantissa.parse().unwrap();
+        if mantissa == 0.0 {
+            return "0".into();
+        }
+        let out = if (-3..6).contains(&exp) {
+            let decimals = (sig as i32 - 1 - exp).max(0) as usize;
+            format!("{:.*}", decimals, mantissa * 10f64.powi(exp))
+        } else {
+            format!("{:.*} × 10{}", sig - 1, mantissa, superscript(exp))
+        };
+        out.replace('-', "−")
+    }
+
+    proptest::proptest! {
+        #[test]
+        fn digits_are_placed_as_the_float_formatter_places_them(
+            v in proptest::prop_oneof![
+                -1e7..1e7f64, -1.0..1.0f64, -1e-2..1e-2f64,
+                proptest::num::f64::NORMAL | proptest::num::f64::SUBNORMAL,
+            ],
+            sig in 1usize..=8,
+        ) {
+            proptest::prop_assert_eq!(format_sig(v, sig), format_sig_by_formatter(v, sig));
+        }
+    }
 
     #[test]
     fn significant_digits() {

@@ -7,13 +7,13 @@
 //! [`inputs`], [`assumptions`] and [`qr_path`] are plain functions, tested natively.
 
 use crate::edge::browser;
-use crate::formats::link::Case;
 use crate::model::case::{CaseForm, Field, Mode};
 use crate::model::choices::{tokens, Cycle, Endurance, Source};
 use crate::model::evaluation::Evaluation;
 use crate::model::inputs::Num;
 use crate::model::source::Outcome;
 use crate::panels::elastic_entry::describe;
+use crate::panels::shared_case::SharedCase;
 use leptos::prelude::*;
 use qrcode::{Color, EcLevel, QrCode};
 use stresscase_core::criteria::{self, Criterion, MohrBranch};
@@ -411,13 +411,7 @@ pub fn SheetHead(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> i
 /// The sheet's end: assumptions, conventions are printed from the page, sources, link, QR, caution.
 #[component]
 pub fn SheetTail(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
-    let link = Memo::new(move |_| {
-        form.with(|f| {
-            Case::from_form(f)
-                .ok()
-                .map(|c| browser::url_with(&c.to_link()))
-        })
-    });
+    let link = SharedCase::of(form).link;
     let items = move || {
         shown.with(|e| {
             e.as_ref().map(|e| {

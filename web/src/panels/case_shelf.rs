@@ -5,6 +5,7 @@ use crate::edge::browser::{self, LIBRARY_KEY};
 use crate::formats::link::Case;
 use crate::formats::saved::Library;
 use crate::model::case::{CaseForm, Field};
+use crate::panels::shared_case::SharedCase;
 use leptos::html;
 use leptos::prelude::*;
 use leptos::task::spawn_local;
@@ -36,13 +37,7 @@ pub fn CaseShelf(
     let library = RwSignal::new(load_library(storage_problem));
     let status = RwSignal::new(String::new());
     let save_name = RwSignal::new(String::new());
-    let link = Memo::new(move |_| {
-        form.with(|f| {
-            Case::from_form(f)
-                .ok()
-                .map(|c| browser::url_with(&c.to_link()))
-        })
-    });
+    let link = SharedCase::of(form).link;
     let persist = move || {
         let text = library.with(Library::to_json);
         match browser::store(LIBRARY_KEY, &text) {

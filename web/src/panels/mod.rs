@@ -1,4 +1,4 @@
-//! One file per panel the user sees, named after it, and `plot`, the drawing helpers they share.
+//! One file per panel the user sees, named after it, `plot`, the drawing helpers they share, and `shared_case`, the form read as a whole case once for all of them.
 
 pub mod calc_sheet;
 pub mod case_shelf;
@@ -21,6 +21,7 @@ pub mod rosette_entry;
 pub mod scan_plot;
 pub mod section_loads;
 pub mod section_sketch;
+pub mod shared_case;
 pub mod source_pick;
 pub mod stale_notice;
 pub mod strain_circle;

@@ -5,6 +5,7 @@
 //! [`picture`] turns core's scan into plain drawing data (tested natively); [`ScanPlot`] draws
 //! it. The `<svg>` carries the highest values as `data-max-vm` and `data-max-s1` (case unit).
 
+use crate::formats::link::Case;
 use crate::model::case::{CaseForm, Field};
 use crate::model::choices::{SectionKind, Source};
 use crate::model::evaluation::Evaluation;
@@ -13,8 +14,9 @@ use crate::model::judge::Governing;
 use crate::model::numfmt::{format_for_entry, format_sig};
 use crate::model::source::{self, Outcome};
 use crate::panels::export_buttons::ExportButtons;
-use crate::panels::plot::nice_ticks;
+use crate::panels::plot::{nice_ticks, push_point};
 use crate::panels::results::location_text;
+use crate::panels::shared_case::SharedCase;
 use crate::panels::stale_notice::StaleBadge;
 use leptos::prelude::*;
 use stresscase_core::section::{Critical, Location, Path, Scan, Section};
@@ -130,11 +132,11 @@ pub fn picture(
     let mut lines = Vec::new();
     for c in &scan.curves {
         let pts = |pick: fn(&stresscase_core::section::Sample) -> f64| {
-            c.samples
-                .iter()
-                .map(|s| format!("{:.2},{:.2}", px(s.position), py(pick(s))))
-                .collect::<Vec<_>>()
-                .join(" ")
+            let mut out = String::with_capacity(16 * (c.samples.len() + 1));
+            for s in &c.samples {
+                push_point(&mut out, px(s.position), py(pick(s)));
+            }
+            out
         };
         let (vm, s1) = match c.path {
             Path::Bore => ("vm bore", "s1 bore"),
@@ -145,8 +147,8 @@ pub fn picture(
         let mut s1_pts = pts(|s| s.sigma1);
         if round {
             if let Some(first) = c.samples.first() {
-                vm_pts.push_str(&format!(" {:.2},{:.2}", px(x_max), py(first.von_mises)));
-                s1_pts.push_str(&format!(" {:.2},{:.2}", px(x_max), py(first.sigma1)));
+                push_point(&mut vm_pts, px(x_max), py(first.von_mises));
+                push_point(&mut s1_pts, px(x_max), py(first.sigma1));
             }
         }
         lines.push(Line {
@@ -217,12 +219,11 @@ pub fn picture(
 }
 
 /// The rectangle of the case in its length unit, if the section is one.
-fn rectangle_of(form: &CaseForm) -> Option<stresscase_core::section::Rectangle> {
-    let case = crate::formats::link::Case::from_form(form).ok()?;
+fn rectangle_of(case: &Case) -> Option<stresscase_core::section::Rectangle> {
     let mut c = case.choices;
     // Positions on the plot are in the length unit: build the section in that unit.
     c.length = stresscase_core::units::LengthUnit::M;
-    match source::section(&c, &case).ok()? {
+    match source::section(&c, case).ok()? {
         Section::Rectangle(r) => Some(r),
         Section::Round(_) => None,
     }
@@ -267,6 +268,7 @@ pub fn ScanPlot(
     shown: Memo<Option<Evaluation>>,
     stale: Memo<bool>,
 ) -> impl IntoView {
+    let shared = SharedCase::of(form);
     let scan = Memo::new(move |_| {
         shown.with(|e| {
             e.as_ref().and_then(|e| match &e.outcome {
@@ -296,20 +298,22 @@ pub fn ScanPlot(
     let pic = Memo::new(move |_| {
         scan.with(|s| {
             s.as_ref().map(|(scan, unit, au, lu)| {
-                let rect = form.with(rectangle_of);
-                let perimeter = rect.map_or(0.0, |r| r.perimeter());
-                let chosen = form.with(|f| {
-                    let case = crate::formats::link::Case::from_form(f).ok()?;
+                let (rect, chosen) = shared.case.with(|c| {
+                    let Some(case) = c.as_ref() else {
+                        return (None, None);
+                    };
                     use crate::model::source::Numbers;
-                    match (rect, f.choices.kind) {
-                        (Some(r), _) => Some(r.position_of(f.choices.face, case.get(Num::Along))),
-                        (None, _) => Some(
-                            f.angle_unit
-                                .to_radians(case.get(Num::Phi))
-                                .rem_euclid(2.0 * core::f64::consts::PI),
-                        ),
-                    }
+                    let rect = rectangle_of(case);
+                    let chosen = match rect {
+                        Some(r) => r.position_of(case.choices.face, case.get(Num::Along)),
+                        None => case
+                            .angle_unit
+                            .to_radians(case.get(Num::Phi))
+                            .rem_euclid(2.0 * core::f64::consts::PI),
+                    };
+                    (rect, Some(chosen))
                 });
+                let perimeter = rect.map_or(0.0, |r| r.perimeter());
                 let mut p = picture(scan, unit.symbol(), *au, lu.symbol(), perimeter, chosen);
                 if let Some(r) = rect {
                     let (b, h) = (r.width(), r.depth());

@@ -1,12 +1,12 @@
 //! The section as seen from its +x end (x towards the viewer, so y up and z to the left), with
 //! the chosen point and the critical points of the scan marked: where φ and the faces are.
 
-use crate::formats::link::Case;
 use crate::model::case::CaseForm;
 use crate::model::choices::Source;
 use crate::model::evaluation::Evaluation;
 use crate::model::source::{self, Outcome};
 use crate::model::{choices, inputs};
+use crate::panels::shared_case::SharedCase;
 use leptos::prelude::*;
 use stresscase_core::section::{Face, Location, Section};
 use stresscase_core::units::LengthUnit;
@@ -90,8 +90,9 @@ pub fn picture(s: &Section, points: &[(&'static str, Location)]) -> Picture {
 /// The sketch, drawn inside the section panel.
 #[component]
 pub fn SectionSketch(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
+    let shared = SharedCase::of(form);
     let pic = Memo::new(move |_| {
-        let case = form.with(|f| Case::from_form(f).ok())?;
+        let case = shared.case.get()?;
         if case.choices.source != Source::Section {
             return None;
         }
