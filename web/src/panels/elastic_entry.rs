@@ -10,6 +10,7 @@ use crate::model::numfmt::format_for_entry;
 use crate::model::source::ElasticUsed;
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::number_field::SourceFields;
+use crate::panels::shared_case::SharedCase;
 use leptos::prelude::*;
 use stresscase_core::StressUnit;
 
@@ -59,8 +60,9 @@ pub fn ElasticEntry(
     shown: Memo<Option<Evaluation>>,
     stale: Memo<bool>,
 ) -> impl IntoView {
-    let own = Memo::new(move |_| form.with(|f| f.choices.material == MaterialPick::Own));
-    let typed = Memo::new(move |_| form.with(|f| f.choices.elastic_typed()));
+    let choices = SharedCase::of(form).choices;
+    let own = Memo::new(move |_| choices.with(|c| c.material == MaterialPick::Own));
+    let typed = Memo::new(move |_| choices.with(|c| c.elastic_typed()));
     view! {
         <fieldset class="panel" id="panel-elastic">
             <legend><h2 class="panel-title">"Elastic constants (isotropic)"</h2></legend>

@@ -13,6 +13,7 @@ use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::export_buttons::ExportButtons;
 use crate::panels::number_field::SourceFields;
 use crate::panels::plot::nice_ticks;
+use crate::panels::shared_case::SharedCase;
 use crate::panels::stale_notice::StaleBadge;
 use leptos::prelude::*;
 use stresscase_core::fatigue::FatigueCriterion;
@@ -140,7 +141,8 @@ pub fn FatigueCheck(
     shown: Memo<Option<Evaluation>>,
     stale: Memo<bool>,
 ) -> impl IntoView {
-    let on = Memo::new(move |_| form.with(|f| f.choices.fatigue));
+    let choices = SharedCase::of(form).choices;
+    let on = Memo::new(move |_| choices.with(|c| c.fatigue));
     let data = Memo::new(move |_| {
         shown.with(|e| {
             e.as_ref().and_then(|e| {
@@ -265,18 +267,18 @@ pub fn FatigueCheck(
                         options=vec![("ratio", "the state on screen is the maximum; minimum = R × maximum"), ("min", "the state on screen is the maximum; the minimum below"), ("alt", "the state on screen is the mean; the alternating amplitude below"), ("loads", "loads on a section: steady loads, and alternating loads below")]
                         get=|f| tokens::token(&tokens::CYCLE, f.choices.cycle)
                         set=|f, v| if let Some(c) = tokens::value(&tokens::CYCLE, v) { f.set_cycle(c); }/>
-                    <p class="hint" id="loads-cycle-hint" hidden=move || form.with(|f| f.choices.section_with_loads())>"A cycle of loads is for loads on a shaft, tube or rectangle."</p>
+                    <p class="hint" id="loads-cycle-hint" hidden=move || choices.with(|c| c.section_with_loads())>"A cycle of loads is for loads on a shaft, tube or rectangle."</p>
                     <SourceFields form=form place=Place::CycleRatio/>
-                    <div hidden=move || !form.with(|f| f.choices.loads_cycle())>
+                    <div hidden=move || !choices.with(|c| c.loads_cycle())>
                         <label class="check" hidden=move || !form.with(|f| matches!(f.choices.kind, SectionKind::SolidRound | SectionKind::Tube))>
-                            <input type="checkbox" id="rotating-shaft" prop:checked=move || form.with(|f| f.choices.rotating)
+                            <input type="checkbox" id="rotating-shaft" prop:checked=move || choices.with(|c| c.rotating)
                                 on:change:target=move |ev| form.update(|f| f.choices.rotating = ev.target().checked())/>
                             " rotating shaft: bending fully reversed, axial force, torque and pressure steady"
                         </label>
                         <SourceFields form=form place=Place::AltLoads/>
                         <p class="hint">"The loads in the section panel are the steady part; the state on screen and the static check are the peak (steady + alternating). On a rotating shaft the resultant bending moment is taken fully reversed at the point."</p>
                     </div>
-                    <div hidden=move || !form.with(|f| f.choices.notch_fatigue())>
+                    <div hidden=move || !choices.with(|c| c.notch_fatigue())>
                         <ChoiceSelect form=form id="notch-q" label="Notch sensitivity"
                             options=vec![("typed", "q and qs typed (1: Kf = Kt, the safe side)"), ("neuber", "Neuber's equation from Sut and the notch radius (steels)")]
                             get=|f| tokens::token(&tokens::NOTCH_Q, f.choices.notch_q)
@@ -294,7 +296,7 @@ pub fn FatigueCheck(
                         options=vec![("estimate", "estimate for a steel: Se′ = 0.5 Sut with Marin factors"), ("given", "given (corrected for the part)")]
                         get=|f| tokens::token(&tokens::ENDURANCE, f.choices.endurance)
                         set=|f, v| if let Some(x) = tokens::value(&tokens::ENDURANCE, v) { f.choices.endurance = x; }/>
-                    <div hidden=move || form.with(|f| f.choices.endurance != Endurance::Estimate)>
+                    <div hidden=move || choices.with(|c| c.endurance != Endurance::Estimate)>
                         <ChoiceSelect form=form id="finish" label="surface"
                             options=vec![("ground", "ground"), ("machined", "machined or cold-drawn"), ("hotrolled", "hot-rolled"), ("forged", "as forged")]
                             get=|f| tokens::token(&tokens::FINISH, f.choices.finish)
@@ -304,7 +306,7 @@ pub fn FatigueCheck(
                             get=|f| tokens::token(&tokens::LOADING, f.choices.loading)
                             set=|f, v| if let Some(x) = tokens::value(&tokens::LOADING, v) { f.choices.loading = x; }/>
                     </div>
-                    <div hidden=move || form.with(|f| f.choices.endurance != Endurance::Given)>
+                    <div hidden=move || choices.with(|c| c.endurance != Endurance::Given)>
                         <ChoiceSelect form=form id="se-unit" label="Se in"
                             options=StressUnit::ALL.iter().map(|u| (u.symbol(), u.symbol())).collect()
                             get=|f| f.choices.strength_unit.symbol()

@@ -19,6 +19,7 @@ use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::export_buttons::ExportButtons;
 use crate::panels::mohr_diagram::NarrowScreen;
 use crate::panels::number_field::SourceFields;
+use crate::panels::shared_case::SharedCase;
 use crate::panels::stale_notice::StaleBadge;
 use leptos::prelude::*;
 use std::sync::Arc;
@@ -213,7 +214,8 @@ pub fn LifeCheck(
     shown: Memo<Option<Evaluation>>,
     stale: Memo<bool>,
 ) -> impl IntoView {
-    let fatigue_on = Memo::new(move |_| form.with(|f| f.choices.fatigue));
+    let choices = SharedCase::of(form).choices;
+    let fatigue_on = Memo::new(move |_| choices.with(|c| c.fatigue));
     let narrow = use_context::<NarrowScreen>().map(|n| n.0);
     let width = move || {
         if narrow.is_some_and(|n| n.get()) {
@@ -222,14 +224,14 @@ pub fn LifeCheck(
             pictures::W_WIDE
         }
     };
-    let on = Memo::new(move |_| form.with(|f| f.choices.life_on()));
-    let of_history = Memo::new(move |_| form.with(|f| f.choices.history_on()));
+    let on = Memo::new(move |_| choices.with(|c| c.life_on()));
+    let of_history = Memo::new(move |_| choices.with(|c| c.history_on()));
     let of_table = Memo::new(move |_| {
         form.with(|f| {
             f.choices.life_on() && f.choices.life_of == crate::model::choices::LifeOf::Table
         })
     });
-    let strengths = Memo::new(move |_| form.with(|f| f.choices.life_strengths()));
+    let strengths = Memo::new(move |_| choices.with(|c| c.life_strengths()));
     let data = Memo::new(move |_| {
         shown.with(|e| {
             e.as_ref()

@@ -8,6 +8,7 @@ use crate::model::evaluation::Evaluation;
 use crate::model::numfmt::format_sig;
 use crate::model::source::{Outcome, ShapeFactors};
 use crate::panels::choice_select::ChoiceSelect;
+use crate::panels::shared_case::SharedCase;
 use crate::panels::stale_notice::StaleBadge;
 use leptos::prelude::*;
 use stresscase_core::concentration::Fitted;
@@ -135,11 +136,12 @@ fn factors_view(f: &ShapeFactors) -> AnyView {
 /// The "Kt and Kts from" choice and the shape's sketch (its dimensions are typed below it).
 #[component]
 pub fn NotchShape(form: RwSignal<CaseForm>) -> impl IntoView {
+    let choices = SharedCase::of(form).choices;
     let options: Vec<(&'static str, &'static str)> = tokens::KT_FROM
         .iter()
         .map(|(k, t)| (*t, from_text(*k)))
         .collect();
-    let kind = Memo::new(move |_| form.with(|f| f.choices.kt_from));
+    let kind = Memo::new(move |_| choices.with(|c| c.kt_from));
     view! {
         <ChoiceSelect form=form id="kt-from" label="Kt and Kts from" options=options
             get=|f| tokens::token(&tokens::KT_FROM, f.choices.kt_from)
@@ -163,7 +165,8 @@ pub fn FittedFactors(
     shown: Memo<Option<Evaluation>>,
     stale: Memo<bool>,
 ) -> impl IntoView {
-    let on = Memo::new(move |_| form.with(|f| f.choices.kt_from != KtFrom::Typed));
+    let choices = SharedCase::of(form).choices;
+    let on = Memo::new(move |_| choices.with(|c| c.kt_from != KtFrom::Typed));
     let fitted = Memo::new(move |_| {
         shown.with(|e| match e.as_ref().and_then(|e| e.outcome.as_ref()) {
             Some(Outcome::Section(s)) => s.shape.clone(),

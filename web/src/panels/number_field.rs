@@ -3,6 +3,7 @@
 
 use crate::model::case::{CaseForm, Field, FieldProblem};
 use crate::model::evaluation::Evaluation;
+use crate::panels::shared_case::SharedCase;
 use leptos::prelude::*;
 
 /// The evaluation result the page shares with its fields, so each field can show core's reason
@@ -74,11 +75,12 @@ pub fn NumberField(form: RwSignal<CaseForm>, field: Field) -> impl IntoView {
 #[component]
 pub fn SourceFields(form: RwSignal<CaseForm>, place: crate::model::inputs::Place) -> impl IntoView {
     let nums = place.numbers();
+    let choices = SharedCase::of(form).choices;
     let shown = Memo::new(move |_| {
-        form.with(|f| {
+        choices.with(|c| {
             nums.iter()
                 .copied()
-                .filter(|&n| f.choices.uses(n))
+                .filter(|&n| c.uses(n))
                 .collect::<Vec<_>>()
         })
     });

@@ -10,6 +10,7 @@ use crate::model::source::Outcome;
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::elastic_entry::ElasticNote;
 use crate::panels::number_field::SourceFields;
+use crate::panels::shared_case::SharedCase;
 use leptos::prelude::*;
 use stresscase_core::rosette::Gauge;
 use stresscase_core::units::StrainUnit;
@@ -65,11 +66,11 @@ pub fn RosetteEntry(
     shown: Memo<Option<Evaluation>>,
     stale: Memo<bool>,
 ) -> impl IntoView {
-    let on = Memo::new(move |_| form.with(|f| f.choices.source == Source::Rosette));
-    let custom = Memo::new(move |_| {
-        form.with(|f| f.choices.layout == crate::model::choices::Layout::Custom)
-    });
-    let correct = Memo::new(move |_| form.with(|f| f.choices.correct));
+    let choices = SharedCase::of(form).choices;
+    let on = Memo::new(move |_| choices.with(|c| c.source == Source::Rosette));
+    let custom =
+        Memo::new(move |_| choices.with(|c| c.layout == crate::model::choices::Layout::Custom));
+    let correct = Memo::new(move |_| choices.with(|c| c.correct));
     let marks = Memo::new(move |_| {
         shown.with(|e| match e.as_ref().map(|e| (&e.outcome, e.angle_unit)) {
             Some((Some(Outcome::Rosette(r)), au)) => sketch(&r.gauges, au),

@@ -12,6 +12,7 @@ use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::notch_shape::{FittedFactors, NotchShape};
 use crate::panels::number_field::SourceFields;
 use crate::panels::section_sketch::SectionSketch;
+use crate::panels::shared_case::SharedCase;
 use leptos::prelude::*;
 use stresscase_core::section::Section;
 use stresscase_core::units::{ForceUnit, LengthUnit, MomentUnit};
@@ -51,8 +52,9 @@ pub fn SectionLoads(
     shown: Memo<Option<Evaluation>>,
     stale: Memo<bool>,
 ) -> impl IntoView {
-    let on = Memo::new(move |_| form.with(|f| f.choices.source == Source::Section));
-    let kind = Memo::new(move |_| form.with(|f| f.choices.kind));
+    let choices = SharedCase::of(form).choices;
+    let on = Memo::new(move |_| choices.with(|c| c.source == Source::Section));
+    let kind = Memo::new(move |_| choices.with(|c| c.kind));
     let kinds: Vec<(&'static str, &'static str)> = tokens::KIND
         .iter()
         .map(|(k, t)| (*t, kind_text(*k)))
@@ -130,7 +132,7 @@ pub fn SectionLoads(
                         <SourceFields form=form place=Place::Concentration/>
                         <FittedFactors form=form shown=shown stale=stale/>
                         <label class="check">
-                            <input type="checkbox" id="static-kt" prop:checked=move || form.with(|f| f.choices.static_kt)
+                            <input type="checkbox" id="static-kt" prop:checked=move || choices.with(|c| c.static_kt)
                                 on:change:target=move |ev| form.update(|f| f.choices.static_kt = ev.target().checked())/>
                             " apply Kt and Kts to the state on screen and the static check"
                         </label>

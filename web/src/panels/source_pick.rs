@@ -4,6 +4,7 @@ use crate::model::case::{CaseForm, Field};
 use crate::model::choices::Source;
 use crate::model::evaluation::Evaluation;
 use crate::model::numfmt::format_for_entry;
+use crate::panels::shared_case::SharedCase;
 use leptos::prelude::*;
 
 /// Switches the path. Going back to typed components starts from the tensor on screen, so a
@@ -24,6 +25,7 @@ fn switch(form: &mut CaseForm, to: Source, shown: Option<&Evaluation>) {
 /// The radio group.
 #[component]
 pub fn SourcePick(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
+    let choices = SharedCase::of(form).choices;
     let options = [
         (Source::Typed, "src-typed", "Stress components, typed in"),
         (
@@ -45,7 +47,7 @@ pub fn SourcePick(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> 
                 {options.into_iter().map(|(src, id, text)| view! {
                     <label>
                         <input type="radio" name="source" id=id
-                            prop:checked=move || form.with(|f| f.choices.source == src)
+                            prop:checked=move || choices.with(|c| c.source == src)
                             on:change=move |_| shown.with_untracked(|e| form.update(|f| switch(f, src, e.as_ref())))/>
                         {text}
                     </label>

@@ -8,6 +8,7 @@ use crate::model::inputs::Place;
 use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::elastic_entry::ElasticNote;
 use crate::panels::number_field::SourceFields;
+use crate::panels::shared_case::SharedCase;
 use leptos::prelude::*;
 use stresscase_core::units::StrainUnit;
 
@@ -18,7 +19,8 @@ pub fn StrainEntry(
     shown: Memo<Option<Evaluation>>,
     stale: Memo<bool>,
 ) -> impl IntoView {
-    let on = Memo::new(move |_| form.with(|f| f.choices.source == Source::Strain));
+    let choices = SharedCase::of(form).choices;
+    let on = Memo::new(move |_| choices.with(|c| c.source == Source::Strain));
     move || {
         on.get().then(|| view! {
             <fieldset class="panel" id="panel-strain">

@@ -5,6 +5,7 @@ use crate::model::choices::Source;
 use crate::model::evaluation::Evaluation;
 use crate::model::numfmt::{format_sig, RESULT_DIGITS};
 use crate::panels::number_field::NumberField;
+use crate::panels::shared_case::SharedCase;
 use leptos::prelude::*;
 use stresscase_core::StressUnit;
 
@@ -21,7 +22,8 @@ fn derived_from(source: Source) -> &'static str {
 /// The panel where the stress components are typed, or shown when another path derives them.
 #[component]
 pub fn StressEntry(form: RwSignal<CaseForm>, shown: Memo<Option<Evaluation>>) -> impl IntoView {
-    let typed = Memo::new(move |_| form.with(|f| f.choices.source == Source::Typed));
+    let choices = SharedCase::of(form).choices;
+    let typed = Memo::new(move |_| choices.with(|c| c.source == Source::Typed));
     let derived = move || {
         shown.with(|e| {
             e.as_ref().map(|e| {

@@ -15,6 +15,7 @@ use crate::panels::choice_select::ChoiceSelect;
 use crate::panels::export_buttons::ExportButtons;
 use crate::panels::number_field::SourceFields;
 use crate::panels::plot::{nice_ticks, Frame, Viewport};
+use crate::panels::shared_case::SharedCase;
 use crate::panels::stale_notice::StaleBadge;
 use leptos::prelude::*;
 use stresscase_core::criteria::{self, Criterion, MohrBranch};
@@ -150,7 +151,8 @@ pub fn Verdict(
     shown: Memo<Option<Evaluation>>,
     stale: Memo<bool>,
 ) -> impl IntoView {
-    let own = Memo::new(move |_| form.with(|f| f.choices.material == MaterialPick::Own));
+    let choices = SharedCase::of(form).choices;
+    let own = Memo::new(move |_| choices.with(|c| c.material == MaterialPick::Own));
     let data = Memo::new(move |_| {
         shown.with(|e| {
             e.as_ref().map(|e| {
