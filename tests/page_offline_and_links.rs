@@ -63,6 +63,31 @@ fn opens_from_disk_and_computes() {
 
 #[test]
 #[ignore = "needs the built page: run `cargo xtask test`"]
+fn starts_in_a_browser_without_its_own_base64_decoder() {
+    // Browsers before Chromium 140, Firefox 133 and Safari 18.2 have no
+    // `Uint8Array.fromBase64`; the page decodes its embedded code with `atob` there.
+    let url = format!(
+        "file://{}",
+        dist().join("index.html").canonicalize().unwrap().display()
+    );
+    let mut b = Chromium::launch().unwrap();
+    b.add_init_script(
+        "delete Uint8Array.fromBase64; window.__noFromBase64 = !('fromBase64' in Uint8Array);",
+    )
+    .unwrap();
+    let mut p = Page::with_browser(b, &url);
+    assert_eq!(
+        p.b.eval("window.__noFromBase64").unwrap(),
+        serde_json::json!(true)
+    );
+    p.b.type_into("in-sx", "120").unwrap();
+    let want = Principal::of(&StressTensor::plane(120.0, -22.0, 37.0).unwrap()).sigma1();
+    p.wait_value("sigma1", want);
+    p.no_console_errors();
+}
+
+#[test]
+#[ignore = "needs the built page: run `cargo xtask test`"]
 fn served_from_a_sub_path_and_works_offline_on_the_second_visit() {
     let mut p = Page::open_at("/tools/stresscase/", "");
     let base = p.base_url();

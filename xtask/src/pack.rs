@@ -78,11 +78,11 @@ pub fn packed_wasm(wasm: &[u8]) -> Vec<u8> {
 
 /// Removes the glue's `export` keywords' need for a loader: the glue stays a module (exports in
 /// an inline module are allowed), and the start-up code is appended after it: the embedded
-/// wasm is decoded from base64, inflated (gzip) by `DecompressionStream` and started with
-/// `initSync`. A browser without `DecompressionStream` is told so on the page.
+/// wasm is decoded from base64 (by `Uint8Array.fromBase64` where the browser has it), inflated
+/// (gzip) by `DecompressionStream` and started with `initSync`. A browser without `DecompressionStream` is told so on the page.
 fn boot_script(glue: &str, wasm: &[u8]) -> String {
     format!(
-        "{glue}\n;(async () => {{\n  try {{\n    const text = atob(\"{b64}\");\n    const packed = new Uint8Array(text.length);\n    for (let i = 0; i < text.length; i++) packed[i] = text.charCodeAt(i);\n    const stream = new Blob([packed]).stream().pipeThrough(new DecompressionStream(\"gzip\"));\n    const bytes = new Uint8Array(await new Response(stream).arrayBuffer());\n    initSync({{ module: bytes }});\n  }} catch (e) {{\n    const p = document.createElement(\"p\");\n    p.textContent = \"Stresscase could not start in this browser (it needs WebAssembly and DecompressionStream: Chromium 80, Firefox 113, Safari 16.4 or newer): \" + e;\n    document.body.appendChild(p);\n  }}\n  // The offline cache is set up once the page runs, so it does not compete with the start.\n  if (location.protocol === \"http:\" || location.protocol === \"https:\") {{\n    const m = document.createElement(\"link\");\n    m.rel = \"manifest\";\n    m.href = \"manifest.webmanifest\";\n    document.head.appendChild(m);\n    if (\"serviceWorker\" in navigator) navigator.serviceWorker.register(\"sw.js\").catch(() => {{}});\n  }}\n}})();\n",
+        "{glue}\n;(async () => {{\n  try {{\n    const b64 = \"{b64}\";\n    // The browser's own decoder where it has one (Chromium 140, Firefox 133, Safari 18.2).\n    const packed = Uint8Array.fromBase64 ? Uint8Array.fromBase64(b64) : (() => {{\n      const text = atob(b64);\n      const a = new Uint8Array(text.length);\n      for (let i = 0; i < text.length; i++) a[i] = text.charCodeAt(i);\n      return a;\n    }})();\n    const stream = new Blob([packed]).stream().pipeThrough(new DecompressionStream(\"gzip\"));\n    const bytes = new Uint8Array(await new Response(stream).arrayBuffer());\n    initSync({{ module: bytes }});\n  }} catch (e) {{\n    const p = document.createElement(\"p\");\n    p.textContent = \"Stresscase could not start in this browser (it needs WebAssembly and DecompressionStream: Chromium 80, Firefox 113, Safari 16.4 or newer): \" + e;\n    document.body.appendChild(p);\n  }}\n  // The offline cache is set up once the page runs, so it does not compete with the start.\n  if (location.protocol === \"http:\" || location.protocol === \"https:\") {{\n    const m = document.createElement(\"link\");\n    m.rel = \"manifest\";\n    m.href = \"manifest.webmanifest\";\n    document.head.appendChild(m);\n    if (\"serviceWorker\" in navigator) navigator.serviceWorker.register(\"sw.js\").catch(() => {{}});\n  }}\n}})();\n",
         b64 = B64.encode(packed_wasm(wasm))
     )
 }
@@ -268,7 +268,7 @@ mod tests {
         assert!(script.contains("new DecompressionStream(\"gzip\")"));
         // The embedded module is the wasm gzipped: it inflates back to the same bytes.
         let b64 = script
-            .split("atob(\"")
+            .split("const b64 = \"")
             .nth(1)
             .and_then(|s| s.split('"').next())
             .unwrap();
