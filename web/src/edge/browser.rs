@@ -379,14 +379,21 @@ pub fn show_element(id: &str) {
     }
 }
 
-/// Hands control back to the browser until its next task (a zero-delay timer), so it can paint
-/// and take input between pieces of long work.
+/// Hands control back to the browser until its next task, so it can paint and take input
+/// between pieces of long work. The task is a message on a channel of the page's own: unlike a
+/// zero-delay timer, which browsers hold back to 4 ms once such waits follow one another, it
+/// comes as soon as the browser has done what was waiting (a timer where there is no channel).
 pub async fn yield_to_browser() {
     let promise = js_sys::Promise::new(&mut |resolve, _reject| {
-        let queued = web_sys::window().is_some_and(|w| {
-            w.set_timeout_with_callback_and_timeout_and_arguments_0(&resolve, 0)
-                .is_ok()
+        let posted = web_sys::MessageChannel::new().is_ok_and(|channel| {
+            channel.port1().set_onmessage(Some(&resolve));
+            channel.port2().post_message(&JsValue::NULL).is_ok()
         });
+        let queued = posted
+            || web_sys::window().is_some_and(|w| {
+                w.set_timeout_with_callback_and_timeout_and_arguments_0(&resolve, 0)
+                    .is_ok()
+            });
         if !queued {
             let _ = resolve.call0(&JsValue::NULL);
         }
