@@ -139,8 +139,8 @@ pub fn failure_index(c: Criterion, p: [f64; 3], s: &Strengths) -> Result<f64, Cr
             let sy = s.yield_strength().ok_or(CriterionError::NeedsYield)?;
             (s1 - s3) / sy
         }
-        Criterion::MaxNormal => (s1 / sut).max(-s3 / suc).max(0.0),
-        Criterion::CoulombMohr => s1.max(0.0) / sut - s3.min(0.0) / suc,
+        Criterion::MaxNormal => fmath::max(fmath::max(s1 / sut, -s3 / suc), 0.0),
+        Criterion::CoulombMohr => fmath::max(s1, 0.0) / sut - fmath::min(s3, 0.0) / suc,
         Criterion::ModifiedMohr => {
             if s3 >= 0.0 {
                 s1 / sut

@@ -40,6 +40,30 @@ shim! {
     ceil(x)
 }
 
+/// The larger of `a` and `b`; a NaN is passed over, as [`f64::max`] does. Written as a
+/// comparison because on wasm32 `f64::max` is a call to `fmax` for each number, even in a loop
+/// the compiler has put in vector lanes; the comparison stays in the lanes.
+#[inline(always)]
+#[must_use]
+pub fn max(a: f64, b: f64) -> f64 {
+    if a > b || b.is_nan() {
+        a
+    } else {
+        b
+    }
+}
+
+/// The smaller of `a` and `b`; a NaN is passed over, as [`f64::min`] does (see [`max`]).
+#[inline(always)]
+#[must_use]
+pub fn min(a: f64, b: f64) -> f64 {
+    if a < b || b.is_nan() {
+        a
+    } else {
+        b
+    }
+}
+
 /// `x` wrapped into [0, period) (the Euclidean remainder, which `core` lacks for floats).
 #[inline]
 #[must_use]
@@ -63,5 +87,38 @@ pub fn powf(x: f64, y: f64) -> f64 {
     #[cfg(not(feature = "std"))]
     {
         libm::pow(x, y)
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use proptest::prelude::*;
+
+    /// Any f64 bit pattern: normal, subnormal, ±0, ±∞ and NaNs of every payload.
+    fn any_bits() -> impl Strategy<Value = f64> {
+        prop_oneof![
+            any::<u64>().prop_map(f64::from_bits),
+            Just(f64::NAN),
+            Just(0.0),
+            Just(-0.0),
+            Just(f64::INFINITY),
+            Just(f64::NEG_INFINITY),
+        ]
+    }
+
+    /// Equal as `f64::max`/`min` promise: the same number, or both NaN; ±0 may come either way.
+    fn same(a: f64, b: f64) -> bool {
+        (a.is_nan() && b.is_nan()) || a == b
+    }
+
+    proptest! {
+        #![proptest_config(ProptestConfig::with_cases(4096))]
+
+        #[test]
+        fn max_and_min_agree_with_the_standard_library(a in any_bits(), b in any_bits()) {
+            prop_assert!(same(max(a, b), a.max(b)), "max({a}, {b}) = {}", max(a, b));
+            prop_assert!(same(min(a, b), a.min(b)), "min({a}, {b}) = {}", min(a, b));
+        }
     }
 }

@@ -12,6 +12,7 @@
 use crate::criteria::{failure_index, Criterion};
 use crate::equivalent::{von_mises, DEVIATOR_FLOOR};
 use crate::error::StressError;
+use crate::fmath;
 use crate::invariants::mean_stress;
 use crate::material::Strengths;
 use crate::principal::principal_values_into;
@@ -140,6 +141,8 @@ pub fn allowable(
 /// Indices of the `k` worst of `measures` by `by`, worst first: the first `k` of
 /// [`worst_first`], found without sorting every point (a selection, then a sort of `k`).
 #[must_use]
+// Never inlined, to keep core's speed settings (see `principal_values_into`).
+#[inline(never)]
 pub fn worst_few(measures: &[PointMeasures], by: Measure, k: usize) -> Vec<usize> {
     let mut keyed = keyed(measures, by);
     let k = k.min(keyed.len());
@@ -177,6 +180,8 @@ fn compare_keyed(a: &(bool, f64, usize), b: &(bool, f64, usize)) -> core::cmp::O
 ///
 /// # Errors
 /// Never for well-formed input; the batch principal solver's length check is passed on.
+// Never inlined, to keep core's speed settings (see `principal_values_into`).
+#[inline(never)]
 pub fn measure_all(
     tensors: &[StressTensor],
     criterion: Criterion,
@@ -198,7 +203,7 @@ fn measure_one(
     strengths: &Strengths,
 ) -> PointMeasures {
     let von_mises = von_mises(t);
-    let tresca = (p[0] - p[2]).max(0.0);
+    let tresca = fmath::max(p[0] - p[2], 0.0);
     let defined = von_mises > DEVIATOR_FLOOR * t.frobenius_norm();
     let factor = match failure_index(criterion, p, strengths) {
         Ok(f) if f > 0.0 => 1.0 / f,
@@ -222,6 +227,8 @@ fn measure_one(
 /// Indices of `measures`, worst first by `by`: NaN values last, ties kept in input order (so the
 /// earlier row comes first).
 #[must_use]
+// Never inlined, to keep core's speed settings (see `principal_values_into`).
+#[inline(never)]
 pub fn worst_first(measures: &[PointMeasures], by: Measure) -> Vec<usize> {
     // Sort (NaN?, key, index) triples held together: a cheap comparison on contiguous data,
     // and the index makes the unstable sort give the stable order.

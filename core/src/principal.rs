@@ -183,12 +183,9 @@ pub fn principal_values(tensor: &StressTensor) -> [f64; 3] {
 
 #[inline(always)]
 fn max_abs(c: &[f64; 6]) -> f64 {
-    c[0].abs()
-        .max(c[1].abs())
-        .max(c[2].abs())
-        .max(c[3].abs())
-        .max(c[4].abs())
-        .max(c[5].abs())
+    let m = fmath::max(fmath::max(c[0].abs(), c[1].abs()), c[2].abs());
+    let n = fmath::max(fmath::max(c[3].abs(), c[4].abs()), c[5].abs());
+    fmath::max(m, n)
 }
 
 const TWO_600: f64 = 4.149_515_568_880_993e180; // 2^600, exact
@@ -222,7 +219,7 @@ fn closed_form([a, b, c, d, e, f]: [f64; 6], size2: f64) -> ([f64; 3], bool) {
     y -= (y * y * y - 3.0 * y - 2.0 * ca) / (3.0 * y * y - 3.0);
     y -= (y * y * y - 3.0 * y - 2.0 * ca) / (3.0 * y * y - 3.0);
     // Deflate: x² + y x + (y² − 3) = 0 holds the other two roots, √(12 − 3y²) apart.
-    let gap = fmath::sqrt((12.0 - 3.0 * y * y).max(0.0));
+    let gap = fmath::sqrt(fmath::max(12.0 - 3.0 * y * y, 0.0));
     let neg = cos3 < 0.0;
     let x1 = if neg { 0.5 * (y + gap) } else { y };
     let x2 = if neg {
@@ -249,6 +246,9 @@ const LANES: usize = 8;
 ///
 /// # Errors
 /// [`StressError::LengthMismatch`] when `out` is not as long as `tensors`.
+// Never inlined: the page builds its own code for size and core's for speed, and code inlined
+// into a size-built caller is optimised as the caller is (no unrolled or vector loops).
+#[inline(never)]
 pub fn principal_values_into(
     tensors: &[StressTensor],
     out: &mut [[f64; 3]],
