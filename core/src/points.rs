@@ -139,11 +139,45 @@ pub fn allowable(
 }
 
 /// Indices of the `k` worst of `measures` by `by`, worst first: the first `k` of
-/// [`worst_first`], found without sorting every point (a selection, then a sort of `k`).
+/// [`worst_first`], found without sorting every point. A few (up to [`SCAN_AT_MOST`]) are kept
+/// in order in one pass, with no copy of the measures; more come from a selection, then a sort
+/// of `k`.
 #[must_use]
 // Never inlined, to keep core's speed settings (see `principal_values_into`).
 #[inline(never)]
 pub fn worst_few(measures: &[PointMeasures], by: Measure, k: usize) -> Vec<usize> {
+    if k <= SCAN_AT_MOST {
+        worst_few_by_scan(measures, by, k)
+    } else {
+        worst_few_by_selection(measures, by, k)
+    }
+}
+
+/// The most [`worst_few`] finds in one pass; a page's list of worst rows is shorter.
+pub const SCAN_AT_MOST: usize = 64;
+
+fn worst_few_by_scan(measures: &[PointMeasures], by: Measure, k: usize) -> Vec<usize> {
+    if k == 0 {
+        return Vec::new();
+    }
+    let sign = sign_of(by);
+    // The worst so far, in ranking order; a point joins only when it ranks before the last.
+    let mut kept: Vec<(bool, f64, usize)> = Vec::with_capacity(k + 1);
+    for (i, m) in measures.iter().enumerate() {
+        let key = key_of(by.of(m), sign, i);
+        if kept.len() == k {
+            if compare_keyed(&key, &kept[k - 1]).is_ge() {
+                continue;
+            }
+            kept.pop();
+        }
+        let at = kept.partition_point(|x| compare_keyed(x, &key).is_lt());
+        kept.insert(at, key);
+    }
+    kept.into_iter().map(|(_, _, i)| i).collect()
+}
+
+fn worst_few_by_selection(measures: &[PointMeasures], by: Measure, k: usize) -> Vec<usize> {
     let mut keyed = keyed(measures, by);
     let k = k.min(keyed.len());
     if k == 0 {
@@ -159,15 +193,26 @@ pub fn worst_few(measures: &[PointMeasures], by: Measure, k: usize) -> Vec<usize
 
 /// (NaN?, key growing with badness reversed, index): the ranking order of [`worst_first`].
 fn keyed(measures: &[PointMeasures], by: Measure) -> Vec<(bool, f64, usize)> {
-    let sign = if by.lower_is_worse() { 1.0 } else { -1.0 };
+    let sign = sign_of(by);
     measures
         .iter()
         .enumerate()
-        .map(|(i, m)| {
-            let v = by.of(m);
-            (v.is_nan(), if v.is_nan() { 0.0 } else { sign * v + 0.0 }, i)
-        })
+        .map(|(i, m)| key_of(by.of(m), sign, i))
         .collect()
+}
+
+/// 1 where a lower value is worse, else −1: the key grows as the point gets better.
+fn sign_of(by: Measure) -> f64 {
+    if by.lower_is_worse() {
+        1.0
+    } else {
+        -1.0
+    }
+}
+
+/// A point's place in the ranking: NaN last, then by signed value (−0 made +0), then by index.
+fn key_of(v: f64, sign: f64, i: usize) -> (bool, f64, usize) {
+    (v.is_nan(), if v.is_nan() { 0.0 } else { sign * v + 0.0 }, i)
 }
 
 fn compare_keyed(a: &(bool, f64, usize), b: &(bool, f64, usize)) -> core::cmp::Ordering {
@@ -287,7 +332,11 @@ mod tests {
                 let m = measure_all(&rows, Criterion::VonMises, &s).unwrap();
                 for by in Measure::ALL {
                     let all = worst_first(&m, by);
-                    prop_assert_eq!(worst_few(&m, by, k), all[..k.min(all.len())].to_vec());
+                    let want = all[..k.min(all.len())].to_vec();
+                    prop_assert_eq!(&worst_few(&m, by, k), &want);
+                    // Both ways of finding them, whatever `k`.
+                    prop_assert_eq!(&worst_few_by_scan(&m, by, k), &want);
+                    prop_assert_eq!(&worst_few_by_selection(&m, by, k), &want);
                 }
             }
         }
