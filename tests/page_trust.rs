@@ -240,6 +240,18 @@ fn stale_results_are_marked_everywhere_and_announced() {
         p.text("document.getElementById('stale-notice').dataset.hasResult"),
         "true"
     );
+    // A stale verdict is not in its pass or fail colour: every verdict (the demo fails its
+    // required factor, so the headline has one) is in the colour of the other stale figures.
+    let colours: serde_json::Value = serde_json::from_str(&p.text(
+        "(() => { const c = e => getComputedStyle(e).color; \
+           const muted = c(document.querySelector('#headline .figure:not(.fails):not(.passes) .value')); \
+           const v = Array.from(document.querySelectorAll('#headline .figure.fails .value, #headline .verdict-word, \
+             #criteria-table tr.fails .verdict, #fatigue-table tr.fails td')); \
+           return JSON.stringify({ n: v.length, bright: v.filter(e => c(e) !== muted).map(e => e.textContent) }); })()",
+    ))
+    .unwrap();
+    assert!(colours["n"].as_u64().unwrap() >= 2, "{colours}");
+    assert_eq!(colours["bright"], serde_json::json!([]), "{colours}");
     p.shot("trust-stale");
     p.b.type_into("in-sx", "84").unwrap();
     p.b.wait_for("document.getElementById('stale-notice') === null", WAIT)
