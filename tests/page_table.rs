@@ -3,8 +3,8 @@
 //! its value against core run here on the same numbers), opening the worst row as the case, a
 //! rosette logger file through the case's rosette (against core's rosette reduction) and its
 //! plot against time, a pasted semicolon file with decimal commas, a large file read while the
-//! page keeps answering and then cancelled, and a file of several slices with a byte-order
-//! mark, CRLF and quoted labels only after the first slice, in the folder opened from disk.
+//! page keeps answering and then cancelled, and a file of several pieces with a byte-order
+//! mark, CRLF and quoted labels only after the first piece, in the folder opened from disk.
 
 use rand::{Rng, SeedableRng};
 use std::fmt::Write as _;
@@ -379,9 +379,10 @@ fn a_pasted_semicolon_table_with_decimal_commas_reads() {
 
 #[test]
 #[ignore = "needs the built page: run `cargo xtask test`"]
-fn a_file_with_a_byte_order_mark_crlf_and_late_quoted_labels_reads_in_slices_from_disk() {
-    // Over 4 MB, so the page reads it in several slices; the first quote comes after the first
-    // slice, and one quoted label spans two lines (invented node names and numbers).
+fn a_file_with_a_byte_order_mark_crlf_and_late_quoted_labels_reads_in_pieces_from_disk() {
+    // Over 4 MB, so the page reads it in several pieces as the browser streams it (each up to
+    // a few MB); the first quote comes after the first piece, and one quoted label spans two
+    // lines (invented node names and numbers).
     let mut text = String::from("\u{feff}# plate, MPa\r\nnode,sx,sy,txy\r\n");
     let mut line = 2;
     let mut rows = Vec::new();
@@ -419,7 +420,7 @@ fn a_file_with_a_byte_order_mark_crlf_and_late_quoted_labels_reads_in_slices_fro
     std::fs::create_dir_all(path.parent().unwrap()).unwrap();
     std::fs::write(&path, &text).unwrap();
 
-    // The folder opened from disk (file://): the slices are read there too.
+    // The folder opened from disk (file://): the file is streamed there too.
     let url = format!(
         "file://{}",
         stresscase_tests::page::dist()

@@ -418,7 +418,12 @@ fn fuzz(runs: &str) -> Result {
         run(&cargo(), &["install", "cargo-fuzz", "--locked"])?;
     }
     let r = root();
-    for target in ["link_decoder", "saved_import", "table_reader"] {
+    for target in [
+        "link_decoder",
+        "saved_import",
+        "table_reader",
+        "table_number",
+    ] {
         let corpus = r.join("web/fuzz/corpus").join(target);
         std::fs::create_dir_all(&corpus).map_err(|e| e.to_string())?;
         let seeds = r.join("web/fuzz/seeds").join(target);

@@ -333,26 +333,41 @@ pub fn chosen_file(input: &web_sys::HtmlInputElement) -> Option<(web_sys::File, 
     Some((f, name, size))
 }
 
-/// Bytes `start..end` of a file, as they are (no text decoding, so a large file is never held
-/// whole as text). Reading starts at once; await [`FileSlice::bytes`] for them, and do other
-/// work meanwhile.
-pub fn start_file_slice(file: &web_sys::File, start: f64, end: f64) -> Result<FileSlice, String> {
-    let blob = file
-        .slice_with_f64_and_f64(start, end)
-        .map_err(|e| describe(&e))?;
-    Ok(FileSlice(wasm_bindgen_futures::JsFuture::from(
-        blob.array_buffer(),
-    )))
+/// A file read front to back as the browser hands over its bytes (`Blob.stream()`): chunks of
+/// whatever size the browser reads (tens of KB to a few MB), never the file whole. Reading
+/// the stream is several times faster than reading the file slice after slice (each slice is a
+/// read of its own), and the file's bytes are never held twice.
+pub struct FileStream(web_sys::ReadableStreamDefaultReader);
+
+/// Starts reading `file` as a [`FileStream`].
+pub fn start_file_stream(file: &web_sys::File) -> Result<FileStream, String> {
+    file.stream()
+        .get_reader()
+        .dyn_into::<web_sys::ReadableStreamDefaultReader>()
+        .map(FileStream)
+        .map_err(|e| describe(&e))
 }
 
-/// A slice of a file being read ([`start_file_slice`]).
-pub struct FileSlice(wasm_bindgen_futures::JsFuture);
+impl FileStream {
+    /// The next chunk's bytes, copied into the page's memory; `None` at the end of the file.
+    pub async fn next(&mut self) -> Result<Option<Vec<u8>>, String> {
+        let read = wasm_bindgen_futures::JsFuture::from(self.0.read())
+            .await
+            .map_err(|e| describe(&e))?
+            .unchecked_into::<web_sys::ReadableStreamReadResult>();
+        if read.get_done().unwrap_or(true) {
+            return Ok(None);
+        }
+        let chunk = read.get_value();
+        if !chunk.is_instance_of::<js_sys::Uint8Array>() {
+            return Err("the file did not read as bytes".into());
+        }
+        Ok(Some(chunk.unchecked_into::<js_sys::Uint8Array>().to_vec()))
+    }
 
-impl FileSlice {
-    /// The slice's bytes, copied into the page's memory once they are read.
-    pub async fn bytes(self) -> Result<Vec<u8>, String> {
-        let buffer = self.0.await.map_err(|e| describe(&e))?;
-        Ok(js_sys::Uint8Array::new(&buffer).to_vec())
+    /// Stops reading (the rest of the file is not read).
+    pub fn stop(&self) {
+        let _ = self.0.cancel();
     }
 }
 

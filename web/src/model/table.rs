@@ -16,7 +16,7 @@ use crate::model::choices::{Choices, Condition, Layout, Source};
 use crate::model::inputs::Num;
 use crate::model::judge::Judgement;
 use crate::model::source::{self, Numbers};
-use stresscase_core::points::{measure_all, PointMeasures};
+use stresscase_core::points::{measure_all_into, PointMeasures};
 use stresscase_core::{StressTensor, StressUnit};
 
 /// What a column holds, as the user confirms it (the file format guesses it from the header).
@@ -179,11 +179,13 @@ pub fn evaluate_rows(
             Err(why) => out.refused.push((i, why)),
         }
     }
-    match measure_all(&tensors, judgement.in_use, &judgement.strengths) {
-        Ok(m) => {
-            out.measures.extend(m);
-            Ok(())
-        }
+    match measure_all_into(
+        &tensors,
+        judgement.in_use,
+        &judgement.strengths,
+        &mut out.measures,
+    ) {
+        Ok(()) => Ok(()),
         Err(e) => {
             out.rows.truncate(first_new);
             out.refused.truncate(refused_before);

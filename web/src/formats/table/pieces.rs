@@ -1,5 +1,5 @@
-//! Reading a large table a piece at a time, as its bytes arrive (the page reads a file in
-//! slices and hands control back to the browser between them): complete lines are read as
+//! Reading a large table a piece at a time, as its bytes arrive (the page reads a file as the
+//! browser streams it, handing control back to the browser every few MB): complete lines are read as
 //! they come, so the file's text is never held whole, and the table read in pieces equals the
 //! table read whole (tested, and fuzzed with random cuts).
 

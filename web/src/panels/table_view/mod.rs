@@ -4,7 +4,7 @@
 //! and as a histogram, and any listed row opens as the case. The table itself stays in this
 //! browser tab: it is not in the case link.
 //!
-//! Large tables never block the page: a file is read in slices and the rows are computed in
+//! Large tables never block the page: a file is read as it streams in and the rows are computed in
 //! chunks, and between them the browser paints the progress bar and takes input.
 
 mod column_kinds;

@@ -1,5 +1,6 @@
-//! Getting a table in: a chosen file read in slices of bytes (never held whole as text; the
-//! browser paints and takes input between slices), or pasted text read at once.
+//! Getting a table in: a chosen file read as the browser streams its bytes (never held whole
+//! as text; the browser paints and takes input after every few MB), or pasted text read at
+//! once.
 
 use crate::edge::browser;
 use crate::formats::table::{guess_kinds, read, sniff, Shape, StreamReader, Table, TableError};
@@ -9,8 +10,8 @@ use std::sync::Arc;
 /// Largest table file the page reads, in bytes.
 pub const MAX_TABLE_FILE: usize = 256 * 1024 * 1024;
 
-/// Bytes read from a file between two hand-backs to the browser.
-const SLICE: usize = 4 * 1024 * 1024;
+/// Bytes read from a file between two hand-backs to the browser (about 20 ms of reading).
+const BYTES_PER_TURN: usize = 4 * 1024 * 1024;
 
 /// A table read, with the kinds the user confirmed.
 #[derive(Clone)]
@@ -53,8 +54,9 @@ pub fn load(text: &str, from: String) -> Result<Loaded, String> {
     })
 }
 
-/// Reads `file` (`size` bytes) a slice at a time: its shape from the first slice(s), then
-/// every slice's complete lines as they come. Sets `progress` (0–1) after each slice and asks
+/// Reads `file` (`size` bytes) as the browser streams it: its shape from the first chunk(s),
+/// then every chunk's complete lines as they come. Hands control back to the browser (to
+/// paint and take input) after each [`BYTES_PER_TURN`] of bytes, sets `progress` (0–1) then and asks
 /// `cancelled`; `Ok(None)` when cancelled.
 pub async fn load_file(
     file: web_sys::File,
@@ -68,43 +70,66 @@ pub async fn load_file(
             "the file is {size} bytes; a table file is at most {MAX_TABLE_FILE}"
         ));
     }
-    let slice = |at: f64| browser::start_file_slice(&file, at, (at + SLICE as f64).min(size));
+    let mut stream = browser::start_file_stream(&file)?;
     // The first bytes, until they hold a row to learn the shape from (or the file ends).
     let mut head = Vec::new();
-    let mut at = 0.0;
+    let mut ended = false;
     let (shape, kinds, label) = loop {
-        head.extend(slice(at)?.bytes().await?);
-        at = (at + SLICE as f64).min(size);
+        match stream.next().await? {
+            Some(chunk) => head.extend_from_slice(&chunk),
+            None => ended = true,
+        }
         let upto = memchr::memrchr(b'\n', &head).map_or(head.len(), |i| i + 1);
-        let text = if at >= size { &head[..] } else { &head[..upto] };
-        if text.contains(&0) {
+        let text = if ended { &head[..] } else { &head[..upto] };
+        if memchr::memchr(0, text).is_some() {
+            stream.stop();
             return Err(TableError::Binary.to_string());
         }
         match shape_of(&String::from_utf8_lossy(text)) {
             Ok(s) => break s,
-            Err(TableError::Empty) if at < size => {}
-            Err(e) => return Err(e.to_string()),
+            Err(TableError::Empty) if !ended => {}
+            Err(e) => {
+                stream.stop();
+                return Err(e.to_string());
+            }
         }
     };
     let mut reader = StreamReader::new(&shape, label);
-    // Room for the rows the file holds at the first slice's bytes per line.
+    // Room for the rows the file holds at the first bytes' bytes per line.
     let lines = crate::formats::table::line_ends(&head).max(1);
     let estimate = size / head.len().max(1) as f64 * lines as f64 * 1.02;
     reader.reserve_rows((estimate as usize).min(size as usize / 2));
-    // Each slice is read from the file while the one before is parsed; the waits between
-    // them let the browser paint and take input.
-    let mut next = (at < size).then(|| slice(at)).transpose()?;
-    reader.push(&head).map_err(|e| e.to_string())?;
+    if let Err(e) = reader.push(&head) {
+        stream.stop();
+        return Err(e.to_string());
+    }
+    let mut read = head.len();
     drop(head);
-    while let Some(reading) = next {
-        let bytes = reading.bytes().await?;
-        at = (at + SLICE as f64).min(size);
-        next = (at < size).then(|| slice(at)).transpose()?;
-        progress(at / size);
-        if cancelled() {
-            return Ok(None);
+    let mut since_turn = read;
+    while !ended {
+        let Some(chunk) = stream.next().await? else {
+            ended = true;
+            continue;
+        };
+        read += chunk.len();
+        since_turn += chunk.len();
+        if let Err(e) = reader.push(&chunk) {
+            stream.stop();
+            return Err(e.to_string());
         }
-        reader.push(&bytes).map_err(|e| e.to_string())?;
+        if since_turn >= BYTES_PER_TURN {
+            since_turn = 0;
+            progress(read as f64 / size);
+            browser::yield_to_browser().await;
+            if cancelled() {
+                stream.stop();
+                return Ok(None);
+            }
+        }
+    }
+    // A cancel pressed while the last bytes were read.
+    if cancelled() {
+        return Ok(None);
     }
     Ok(Some(Loaded {
         from: name,
