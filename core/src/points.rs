@@ -102,6 +102,14 @@ impl Measure {
     }
 }
 
+/// The value of measure `by` for every point, in order (what a table's pictures draw).
+#[must_use]
+// Never inlined, to keep core's speed settings (see `principal_values_into`).
+#[inline(never)]
+pub fn values_of(measures: &[PointMeasures], by: Measure) -> Vec<f64> {
+    measures.iter().map(|m| by.of(m)).collect()
+}
+
 /// The allowable value of a measure: where the criterion in use reaches the required factor of
 /// safety `required`, when that criterion limits this measure on its own (a line a plot of the
 /// measure can draw). Same unit as `strengths`. From the criteria's failure functions
@@ -469,6 +477,32 @@ mod tests {
         assert!(m[0].factor.is_nan());
         let m = measure_all(&[t], Criterion::ModifiedMohr, &iron).unwrap();
         assert!((m[0].factor - 4.0).abs() < 1e-12); // Sut/σ1 = 200/50
+    }
+
+    #[test]
+    fn values_of_a_measure_are_each_points_own() {
+        let ts = [
+            StressTensor::new(100.0, -20.0, 5.0, 30.0, 0.0, -8.0).unwrap(),
+            StressTensor::new(-60.0, 0.0, 0.0, 0.0, 12.0, 0.0).unwrap(),
+        ];
+        let m = measure_all(&ts, Criterion::VonMises, &steel()).unwrap();
+        let field = |by: Measure| -> Vec<f64> {
+            m.iter()
+                .map(|p| match by {
+                    Measure::Sigma1 => p.principal[0],
+                    Measure::Sigma2 => p.principal[1],
+                    Measure::Sigma3 => p.principal[2],
+                    Measure::TauMax => p.tau_max,
+                    Measure::VonMises => p.von_mises,
+                    Measure::Tresca => p.tresca,
+                    Measure::Triaxiality => p.triaxiality,
+                    Measure::Factor => p.factor,
+                })
+                .collect()
+        };
+        for by in Measure::ALL {
+            assert_eq!(values_of(&m, by), field(by), "{by:?}");
+        }
     }
 
     #[test]

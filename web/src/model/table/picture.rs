@@ -15,40 +15,63 @@ pub struct Trace {
     pub not_drawn: usize,
 }
 
-/// Reduces the points (`x`, `value`) to `width` columns spanning the points' x.
+/// Reduces the points (`x[i]`, `values[i]`) to `width` columns spanning the points' x (the
+/// shorter slice sets the count).
+///
+/// Plain loops over slices with comparisons (no `f64::min`, a call per number in the page's
+/// wasm): a million points take milliseconds in the page, which is built for size.
 #[must_use]
-pub fn trace(points: impl Iterator<Item = (f64, f64)> + Clone, width: usize) -> Trace {
+pub fn trace(x: &[f64], values: &[f64], width: usize) -> Trace {
+    let n = x.len().min(values.len());
+    let (x, values) = (&x[..n], &values[..n]);
     let (mut lo, mut hi) = (f64::INFINITY, f64::NEG_INFINITY);
-    for (x, _) in points.clone() {
+    for &x in x {
         if x.is_finite() {
-            lo = lo.min(x);
-            hi = hi.max(x);
+            if x < lo {
+                lo = x;
+            }
+            if x > hi {
+                hi = x;
+            }
         }
     }
     let width = width.max(1);
-    let mut columns = vec![None::<(f64, f64)>; width];
-    let mut range = None::<(f64, f64)>;
-    let mut not_drawn = 0;
     if lo > hi {
         return Trace {
             x: (0.0, 1.0),
-            columns,
-            range,
-            not_drawn: points.count(),
+            columns: vec![None; width],
+            range: None,
+            not_drawn: n,
         };
     }
     // A single x still gets a span, so every point lands in a column.
     let span = if hi > lo { hi - lo } else { 1.0 };
-    for (x, v) in points {
+    let mut least = vec![f64::INFINITY; width];
+    let mut greatest = vec![f64::NEG_INFINITY; width];
+    let mut not_drawn = 0;
+    for (&x, &v) in x.iter().zip(values) {
         if !(v.is_finite() && x.is_finite()) {
             not_drawn += 1;
             continue;
         }
-        let at = ((x - lo) / span * width as f64) as usize;
-        let c = &mut columns[at.min(width - 1)];
-        *c = Some(c.map_or((v, v), |(a, b)| (a.min(v), b.max(v))));
-        range = Some(range.map_or((v, v), |(a, b)| (a.min(v), b.max(v))));
+        let at = (((x - lo) / span * width as f64) as usize).min(width - 1);
+        if v < least[at] {
+            least[at] = v;
+        }
+        if v > greatest[at] {
+            greatest[at] = v;
+        }
     }
+    let columns: Vec<Option<(f64, f64)>> = least
+        .iter()
+        .zip(&greatest)
+        .map(|(&a, &b)| (a <= b).then_some((a, b)))
+        .collect();
+    let range = columns.iter().flatten().fold(None, |r, &(a, b)| {
+        Some(r.map_or((a, b), |(lo, hi): (f64, f64)| {
+            (if a < lo { a } else { lo }, if b > hi { b } else { hi })
+        }))
+    });
     Trace {
         x: (lo, lo + span),
         columns,
@@ -72,24 +95,24 @@ pub struct Histogram {
 
 /// The values in `bins` equal bins from the least to the greatest finite value, or to `cap`
 /// when values go beyond it (a factor of safety of 10⁶ at a lightly loaded row would squeeze
-/// the rest into one bin).
+/// the rest into one bin). Plain loops, as [`trace`].
 #[must_use]
-pub fn histogram(
-    values: impl Iterator<Item = f64> + Clone,
-    bins: usize,
-    cap: Option<f64>,
-) -> Histogram {
+pub fn histogram(values: &[f64], bins: usize, cap: Option<f64>) -> Histogram {
     let cap = cap.filter(|c| c.is_finite()).unwrap_or(f64::INFINITY);
     let (mut lo, mut hi) = (f64::INFINITY, f64::NEG_INFINITY);
     let (mut above, mut not_finite) = (0, 0);
-    for v in values.clone() {
+    for &v in values {
         if !v.is_finite() {
             not_finite += 1;
         } else if v > cap {
             above += 1;
         } else {
-            lo = lo.min(v);
-            hi = hi.max(v);
+            if v < lo {
+                lo = v;
+            }
+            if v > hi {
+                hi = v;
+            }
         }
     }
     let bins = bins.max(1);
@@ -103,7 +126,7 @@ pub fn histogram(
         };
     }
     let width = if hi > lo { hi - lo } else { 1.0 };
-    for v in values {
+    for &v in values {
         if v.is_finite() && v <= cap {
             let at = ((v - lo) / width * bins as f64) as usize;
             counts[at.min(bins - 1)] += 1;
@@ -128,7 +151,8 @@ mod tests {
             pts in proptest::collection::vec((-1e3f64..1e3, prop_oneof![-1e6f64..1e6, Just(f64::NAN), Just(f64::INFINITY)]), 0..300),
             width in 1usize..50,
         ) {
-            let t = trace(pts.iter().copied(), width);
+            let (xs, vs): (Vec<f64>, Vec<f64>) = pts.iter().copied().unzip();
+            let t = trace(&xs, &vs, width);
             prop_assert_eq!(t.columns.len(), width);
             let finite: Vec<f64> = pts.iter().map(|p| p.1).filter(|v| v.is_finite()).collect();
             prop_assert_eq!(t.not_drawn, pts.len() - finite.len());
@@ -153,7 +177,7 @@ mod tests {
             bins in 1usize..40,
             cap in prop_oneof![Just(None), (0.0f64..500.0).prop_map(Some)],
         ) {
-            let h = histogram(vs.iter().copied(), bins, cap);
+            let h = histogram(&vs, bins, cap);
             prop_assert_eq!(h.counts.iter().sum::<usize>() + h.above + h.not_finite, vs.len());
             prop_assert_eq!(h.not_finite, vs.iter().filter(|v| !v.is_finite()).count());
         }
@@ -163,10 +187,10 @@ mod tests {
     fn a_histogram_agrees_with_numpy() {
         // numpy.histogram([1, 2, 2, 3, 4, 10], bins=3) → counts [4, 1, 1], edges 1, 4, 7, 10
         // (equal bins over [min, max], the last one closed; values printed by numpy on this machine).
-        let h = histogram([1.0, 2.0, 2.0, 3.0, 4.0, 10.0].into_iter(), 3, None);
+        let h = histogram(&[1.0, 2.0, 2.0, 3.0, 4.0, 10.0], 3, None);
         assert_eq!((h.span, h.counts), ((1.0, 10.0), vec![4, 1, 1]));
         // numpy.histogram([0.1, 0.2, 0.3, 0.7, 0.9, 1.0, 0.35], bins=5) → [2, 2, 0, 1, 2].
-        let h = histogram([0.1, 0.2, 0.3, 0.7, 0.9, 1.0, 0.35].into_iter(), 5, None);
+        let h = histogram(&[0.1, 0.2, 0.3, 0.7, 0.9, 1.0, 0.35], 5, None);
         assert_eq!(h.counts, vec![2, 2, 0, 1, 2]);
     }
 }

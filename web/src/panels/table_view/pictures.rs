@@ -15,7 +15,7 @@ use crate::panels::plot::{nice_ticks, tick_labels};
 use core::fmt::Write as _;
 use leptos::prelude::*;
 use stresscase_core::criteria::Criterion;
-use stresscase_core::points::{allowable, Measure};
+use stresscase_core::points::{allowable, values_of, Measure};
 use stresscase_core::StressUnit;
 
 /// Drawing widths: on a wide screen two pictures side by side, on a phone one narrow picture,
@@ -180,12 +180,11 @@ pub fn MeasureTrace(
         outcome.with(|o| {
             let Some(Ok(o)) = o else { return None };
             let time = l.kinds.iter().position(|k| *k == ColumnKind::Time);
-            let x_of = |k: usize| {
-                let i = o.rows[k];
-                time.map_or(f64::from(l.table.lines[i]), |c| l.table.row(i)[c])
+            let xs: Vec<f64> = match time {
+                Some(c) => o.rows.iter().map(|&i| l.table.row(i)[c]).collect(),
+                None => o.rows.iter().map(|&i| f64::from(l.table.lines[i])).collect(),
             };
-            let points = (0..o.rows.len()).map(|k| (x_of(k), by.of(&o.measures[k])));
-            let t = trace(points, plot_w as usize);
+            let t = trace(&xs, &values_of(&o.measures, by), plot_w as usize);
             let allow = limit.0.map(|(a, _)| a);
             let ys = y_span(t.range, allow);
             let py = |y: f64| TOP + (ys.1 - y) / (ys.1 - ys.0) * PLOT_H;
@@ -257,15 +256,15 @@ pub fn MeasureHistogram(
         let limit = limit.get()?;
         outcome.with(|o| {
             let Some(Ok(o)) = o else { return None };
-            let values = o.measures.iter().map(|m| by.of(m));
+            let values = values_of(&o.measures, by);
             // A factor of safety runs to 10⁶ at lightly loaded rows: bins stop at 5× the
             // required one and the rest is counted beside them.
             let cap = (by == Measure::Factor)
                 .then(|| limit.0.map(|(a, _)| 5.0 * a))
                 .flatten();
-            let mut h = histogram(values.clone(), BINS, cap);
+            let mut h = histogram(&values, BINS, cap);
             if h.counts.iter().all(|&c| c == 0) && h.above > 0 {
-                h = histogram(values, BINS, None);
+                h = histogram(&values, BINS, None);
             }
             let allow = limit.0.map(|(a, _)| a);
             let mut xs = h.span;
