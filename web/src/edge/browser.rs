@@ -335,8 +335,10 @@ pub fn chosen_file(input: &web_sys::HtmlInputElement) -> Option<(web_sys::File, 
 
 /// A file read front to back as the browser hands over its bytes (`Blob.stream()`): chunks of
 /// whatever size the browser reads (tens of KB to a few MB), never the file whole. Reading
-/// the stream is several times faster than reading the file slice after slice (each slice is a
-/// read of its own), and the file's bytes are never held twice.
+/// the stream is faster than reading the file slice after slice (each slice is a read of its
+/// own; about 200 ms against 40–180 ms for a 62 MB file, measured in headless Chromium), and
+/// the file's bytes are never held twice. Every browser the page runs in has it (the page needs
+/// `DecompressionStream`, which came later).
 pub struct FileStream(web_sys::ReadableStreamDefaultReader);
 
 /// Starts reading `file` as a [`FileStream`].
