@@ -1,7 +1,7 @@
 //! Reading a large table a piece at a time, as its bytes arrive (the page reads a file as the
-//! browser streams it, handing control back to the browser every few MB): complete lines are read as
-//! they come, so the file's text is never held whole, and the table read in pieces equals the
-//! table read whole (tested, and fuzzed with random cuts).
+//! browser streams it, handing control back to the browser every few MB): complete lines are
+//! read as they come, so the file's text is never held whole, and the table read in pieces
+//! equals the table read whole (tested, and fuzzed with random cuts).
 
 use super::{read_into, strip_bom_bytes, Cursor, Separator, Shape, Table, TableError};
 
